@@ -1,0 +1,17 @@
+/**
+ * @poreline/core: pure computation for Poreline. No I/O, no Node-only APIs: the same
+ * code runs in the service and in the browser. Typed arrays in, new typed arrays out;
+ * LAS NULL becomes NaN at the reader and stays NaN.
+ *
+ * Explicit grouped re-exports only (no `export *`).
+ */
+
+// --- LAS reading and writing ---
+
+// --- Units and curve recognition ---
+
+// --- Petrophysics: shale volume, porosity, water resistivity, saturation ---
+
+// --- Cutoffs, zone summaries, sensitivity, deviation survey, pipeline ---
+
+// --- Reserves: volumetrics, gas PVT, Monte Carlo, decline, material balance, inflow ---

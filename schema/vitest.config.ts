@@ -1,0 +1,10 @@
+import { defineConfig } from 'vitest/config';
+
+export default defineConfig({
+  resolve: { conditions: ['source'] },
+  ssr: { resolve: { conditions: ['source'] } },
+  test: {
+    name: 'schema',
+    include: ['src/**/*.test.ts', 'test/**/*.test.ts'],
+  },
+});

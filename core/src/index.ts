@@ -14,4 +14,8 @@
 
 // --- Cutoffs, zone summaries, sensitivity, deviation survey, pipeline ---
 
+// --- Binary transfer of curve samples ---
+export { encodeCurveBundle, decodeCurveBundle } from './transfer/curve-bundle.js';
+export type { CurveBundle, CurveBundleEntry } from './transfer/curve-bundle.js';
+
 // --- Reserves: volumetrics, gas PVT, Monte Carlo, decline, material balance, inflow ---

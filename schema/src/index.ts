@@ -1,0 +1,10 @@
+export * from './tables/index.js';
+export type { Organisation, NewOrganisation } from './tables/organisations.js';
+export type { User, NewUser } from './tables/users.js';
+export type { Asset, NewAsset, AssetMember, MemberRole } from './tables/assets.js';
+export type { Well, NewWell } from './tables/wells.js';
+export type { LogRun, NewLogRun, StoredHeaderItem, StoredDiagnostic } from './tables/log-runs.js';
+export type { Curve, NewCurve } from './tables/curves.js';
+export type { AuditEntry, NewAuditEntry } from './tables/audit-log.js';
+export { openDatabase, migrationsFolder, schema } from './database.js';
+export type { Database, OpenDatabase, Schema } from './database.js';

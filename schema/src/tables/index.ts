@@ -1,0 +1,9 @@
+// The table list drizzle-kit reads (drizzle.config.ts) and the schema object for queries.
+export { timestamps, bytea } from './columns.js';
+export { organisations } from './organisations.js';
+export { users } from './users.js';
+export { assets, assetMembers, memberRole } from './assets.js';
+export { wells } from './wells.js';
+export { logRuns } from './log-runs.js';
+export { curves } from './curves.js';
+export { auditLog } from './audit-log.js';

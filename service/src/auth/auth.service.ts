@@ -1,0 +1,34 @@
+import { Injectable, UnauthorizedException } from '@nestjs/common';
+import { JwtService } from '@nestjs/jwt';
+import bcrypt from 'bcryptjs';
+import type { User } from '@poreline/schema';
+import type { LoginResultDto, MeDto } from './dto/me.dto.js';
+import { UsersRepository } from './users.repository.js';
+
+/** A hash to compare against when the e-mail is unknown, so both failures take the same time. */
+const DUMMY_HASH = bcrypt.hashSync('not-a-password', 10);
+
+@Injectable()
+export class AuthService {
+  constructor(
+    private readonly users: UsersRepository,
+    private readonly jwt: JwtService,
+  ) {}
+
+  async login(email: string, password: string): Promise<LoginResultDto> {
+    const user = await this.users.findByEmail(email);
+    const ok = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH);
+    if (!user || !ok) throw new UnauthorizedException('E-mail or password is wrong.');
+    return { token: await this.jwt.signAsync({ sub: user.id }), user: await this.me(user) };
+  }
+
+  async me(user: Pick<User, 'id' | 'email' | 'name' | 'isAdmin' | 'organisationId'>): Promise<MeDto> {
+    return {
+      id: user.id,
+      email: user.email,
+      name: user.name,
+      isAdmin: user.isAdmin,
+      memberships: await this.users.memberships(user),
+    };
+  }
+}

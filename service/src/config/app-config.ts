@@ -1,0 +1,42 @@
+import { resolve } from 'node:path';
+
+/** Settings read once at start-up from the environment (documented in README). */
+export interface AppConfig {
+  /** HTTP port (PORT, default 3000). */
+  port: number;
+  /** PGlite data folder (DATA_DIR, default ./data). Ignored when databaseUrl is set. */
+  dataDir: string;
+  /** PostgreSQL server URL (DATABASE_URL); when set, PGlite is not used. */
+  databaseUrl?: string;
+  /** Secret for signing tokens (JWT_SECRET); when unset one is kept in the data folder. */
+  jwtSecret?: string;
+  /** Token lifetime (JWT_TTL, default 12h). */
+  jwtTtl: string;
+  /** DEMO_MODE=false starts with no demo users and asks for the first admin. Default true. */
+  demoMode: boolean;
+  /** Largest LAS file accepted, bytes (UPLOAD_MAX_MB, default 250 MB). */
+  uploadMaxBytes: number;
+  /** Folder of the built UI to serve at / (UI_DIST); skipped when missing. */
+  uiDist?: string;
+}
+
+export const APP_CONFIG = Symbol('APP_CONFIG');
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
+  const port = Number(env.PORT ?? 3000);
+  if (!Number.isInteger(port) || port <= 0 || port > 65535) throw new Error(`PORT must be a port number, got "${env.PORT}"`);
+  const maxMb = Number(env.UPLOAD_MAX_MB ?? 250);
+  if (!(maxMb > 0)) throw new Error(`UPLOAD_MAX_MB must be a positive number, got "${env.UPLOAD_MAX_MB}"`);
+  const demo = (env.DEMO_MODE ?? 'true').toLowerCase();
+  if (!['true', 'false', '1', '0'].includes(demo)) throw new Error(`DEMO_MODE must be true or false, got "${env.DEMO_MODE}"`);
+  return {
+    port,
+    dataDir: resolve(env.DATA_DIR ?? 'data'),
+    databaseUrl: env.DATABASE_URL || undefined,
+    jwtSecret: env.JWT_SECRET || undefined,
+    jwtTtl: env.JWT_TTL ?? '12h',
+    demoMode: demo === 'true' || demo === '1',
+    uploadMaxBytes: Math.round(maxMb * 1024 * 1024),
+    uiDist: env.UI_DIST ? resolve(env.UI_DIST) : undefined,
+  };
+}

@@ -1,0 +1,65 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { createBrowserRouter, redirect, type RouteObject } from 'react-router-dom';
+import { PageSpinner } from '../components/page-spinner';
+import { AppLayout, appLayoutLoader } from './routes/app-layout';
+import { NotFoundRoute } from './routes/not-found';
+import { RouteError } from './routes/route-error';
+
+/**
+ * Routes. Pages load lazily; each loader prefetches with the same query options its page reads,
+ * so the page renders from cache.
+ */
+export function appRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    {
+      path: '/sign-in',
+      HydrateFallback: PageSpinner,
+      ErrorBoundary: RouteError,
+      lazy: async () => {
+        const { SignInRoute, signInLoader } = await import('./routes/sign-in');
+        return { Component: SignInRoute, loader: signInLoader };
+      },
+    },
+    {
+      path: '/',
+      Component: AppLayout,
+      loader: appLayoutLoader(queryClient),
+      HydrateFallback: PageSpinner,
+      ErrorBoundary: RouteError,
+      children: [
+        { index: true, loader: () => redirect('/assets') },
+        {
+          ErrorBoundary: RouteError,
+          children: [
+            {
+              path: 'assets',
+              lazy: async () => {
+                const { AssetsRoute, assetsLoader } = await import('./routes/assets');
+                return { Component: AssetsRoute, loader: assetsLoader(queryClient) };
+              },
+            },
+            {
+              path: 'assets/:assetId',
+              lazy: async () => {
+                const { AssetRoute, assetLoader } = await import('./routes/asset');
+                return { Component: AssetRoute, loader: assetLoader(queryClient) };
+              },
+            },
+            {
+              path: 'assets/:assetId/wells/:wellId',
+              lazy: async () => {
+                const { WellRoute, wellLoader } = await import('./routes/well');
+                return { Component: WellRoute, loader: wellLoader(queryClient) };
+              },
+            },
+            { path: '*', Component: NotFoundRoute },
+          ],
+        },
+      ],
+    },
+  ];
+}
+
+export function createAppRouter(queryClient: QueryClient) {
+  return createBrowserRouter(appRoutes(queryClient));
+}

@@ -1,0 +1,80 @@
+import { Badge, Box, Button, Container, Flex, Separator, Text } from '@radix-ui/themes';
+import type { QueryClient } from '@tanstack/react-query';
+import { NavLink, Outlet, redirect, useNavigation, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { PageSpinner } from '../../components/page-spinner';
+import { Wordmark } from '../../components/wordmark';
+import { meQueryOptions, useMe } from '../../features/auth/api/get-me';
+import { useSignOut } from '../../features/auth/hooks/use-sign-out';
+import { roleLabel } from '../../features/auth/utils/permissions';
+import { ApiError } from '../../lib/api-client';
+import { getToken } from '../../lib/auth-token';
+
+/** Every page but sign-in needs a user: no token sends to /sign-in (remembering where to return). */
+export const appLayoutLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const url = new URL(request.url);
+    const here = url.pathname + url.search;
+    const toSignIn = here === '/' ? '/sign-in' : `/sign-in?next=${encodeURIComponent(here)}`;
+    if (!getToken()) throw redirect(toSignIn);
+    try {
+      return await queryClient.ensureQueryData(meQueryOptions());
+    } catch (error) {
+      if (error instanceof ApiError && error.status === 401) throw redirect(toSignIn);
+      throw error;
+    }
+  };
+
+/** The shell: product name, main navigation, the signed-in user with their role, sign out. */
+export function AppLayout() {
+  const me = useMe();
+  const { assetId } = useParams();
+  const signOut = useSignOut();
+  const navigation = useNavigation();
+
+  return (
+    <Flex direction="column" minHeight="100vh">
+      <header className="shell-header">
+        <Container size="4" px="4">
+          <Flex align="center" justify="between" gap="4" py="3">
+            <Flex align="center" gap="5">
+              <NavLink to="/assets" aria-label="Poreline, go to assets" style={{ textDecoration: 'none', color: 'inherit' }}>
+                <Wordmark />
+              </NavLink>
+              <nav aria-label="Main">
+                <NavLink to="/assets" className="strong-link" end>
+                  Assets
+                </NavLink>
+              </nav>
+            </Flex>
+            {me.data ? (
+              <Flex align="center" gap="3">
+                <Flex direction="column" align="end">
+                  <Text size="2" weight="medium">
+                    {me.data.name}
+                  </Text>
+                  <Text size="1" color="gray">
+                    {me.data.email}
+                  </Text>
+                </Flex>
+                <Badge variant="soft" aria-label={`Role: ${roleLabel(me.data, assetId)}`}>
+                  {roleLabel(me.data, assetId)}
+                </Badge>
+                <Separator orientation="vertical" size="2" />
+                <Button variant="ghost" color="gray" onClick={signOut}>
+                  Sign out
+                </Button>
+              </Flex>
+            ) : null}
+          </Flex>
+        </Container>
+        {navigation.state === 'loading' ? <div className="shell-progress" role="progressbar" aria-label="Loading page" /> : <Box height="2px" />}
+      </header>
+      <main className="shell-main">
+        <Container size="4" px="4" py="5">
+          {me.data ? <Outlet /> : <PageSpinner />}
+        </Container>
+      </main>
+    </Flex>
+  );
+}

@@ -1,0 +1,81 @@
+import { Badge, Callout, Card, Flex, Heading, Text } from '@radix-ui/themes';
+import type { QueryClient } from '@tanstack/react-query';
+import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Breadcrumbs } from '../../components/breadcrumbs';
+import { PageSpinner } from '../../components/page-spinner';
+import { PanelErrorBoundary } from '../../components/panel-error-boundary';
+import { assetQueryOptions, useAsset } from '../../features/assets/api/get-asset';
+import { useMe } from '../../features/auth/api/get-me';
+import { canEditWells, roleInAsset } from '../../features/auth/utils/permissions';
+import { useWells, wellsQueryOptions } from '../../features/wells/api/get-wells';
+import { NewWellForm } from '../../features/wells/components/new-well-form';
+import { WellsTable } from '../../features/wells/components/wells-table';
+
+export const assetLoader =
+  (queryClient: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    const assetId = params.assetId!;
+    await Promise.all([queryClient.ensureQueryData(assetQueryOptions(assetId)), queryClient.prefetchQuery(wellsQueryOptions(assetId))]);
+    return null;
+  };
+
+export function AssetRoute() {
+  const assetId = useParams().assetId!;
+  const asset = useAsset(assetId);
+  const wells = useWells(assetId);
+  const me = useMe();
+  const canEdit = me.data ? canEditWells(me.data, assetId) : false;
+
+  if (asset.isPending) return <PageSpinner label="Loading asset…" />;
+  if (asset.isError) {
+    return (
+      <Callout.Root color="tomato" role="alert">
+        <Callout.Text>{asset.error.message}</Callout.Text>
+      </Callout.Root>
+    );
+  }
+
+  return (
+    <Flex direction="column" gap="5">
+      <title>{`${asset.data.name} · Poreline`}</title>
+      <Breadcrumbs items={[{ label: 'Assets', to: '/assets' }, { label: asset.data.name }]} />
+      <Flex direction="column" gap="1">
+        <Flex align="center" gap="3" wrap="wrap">
+          <Heading as="h1" size="7">
+            {asset.data.name}
+          </Heading>
+          {me.data ? <Badge variant="soft">{roleInAsset(me.data, assetId) ?? asset.data.role}</Badge> : null}
+        </Flex>
+        {asset.data.description ? <Text color="gray">{asset.data.description}</Text> : null}
+      </Flex>
+
+      {canEdit ? (
+        <Card size="2">
+          <NewWellForm assetId={assetId} />
+        </Card>
+      ) : null}
+
+      <Flex direction="column" gap="2">
+        <Heading as="h2" size="4">
+          Wells and log runs
+        </Heading>
+        {canEdit ? (
+          <Text size="2" color="gray">
+            Drop LAS files (1.2, 2.0 or 3.0) on a well, or browse for them; several at once is fine.
+          </Text>
+        ) : null}
+        <PanelErrorBoundary title="The wells table">
+          {wells.isPending ? (
+            <PageSpinner label="Loading wells…" />
+          ) : wells.isError ? (
+            <Callout.Root color="tomato" role="alert">
+              <Callout.Text>Wells could not be loaded: {wells.error.message}</Callout.Text>
+            </Callout.Root>
+          ) : (
+            <WellsTable assetId={assetId} wells={wells.data} canUpload={canEdit} />
+          )}
+        </PanelErrorBoundary>
+      </Flex>
+    </Flex>
+  );
+}

@@ -1,0 +1,18 @@
+import { cleanup } from '@testing-library/react';
+import { afterEach } from 'vitest';
+
+// Testing Library unmounts after each test only when test globals exist; we keep them off.
+afterEach(() => {
+  cleanup();
+  window.localStorage.clear();
+});
+
+// jsdom lacks ResizeObserver, which Radix primitives (scroll areas) observe.
+if (!('ResizeObserver' in globalThis)) {
+  class ResizeObserverStub {
+    observe() {}
+    unobserve() {}
+    disconnect() {}
+  }
+  (globalThis as unknown as { ResizeObserver: typeof ResizeObserverStub }).ResizeObserver = ResizeObserverStub;
+}

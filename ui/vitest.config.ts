@@ -1,0 +1,17 @@
+import react from '@vitejs/plugin-react';
+import { defaultClientConditions } from 'vite';
+import { defineConfig } from 'vitest/config';
+
+// Component tests in jsdom. Browser (Chromium) tests live in e2e/ with their own config.
+export default defineConfig({
+  plugins: [react()],
+  resolve: { conditions: ['source', ...defaultClientConditions] },
+  ssr: { resolve: { conditions: ['source'] } },
+  test: {
+    name: 'ui',
+    environment: 'jsdom',
+    include: ['src/**/*.test.tsx', 'src/**/*.test.ts'],
+    exclude: ['e2e/**', 'node_modules/**', 'dist/**'],
+    setupFiles: ['./src/test/setup.ts'],
+  },
+});

@@ -1,21 +1,30 @@
+import type { QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import { RouterProvider } from 'react-router-dom';
+import { RouterProvider, type createBrowserRouter } from 'react-router-dom';
 import { setUnauthorizedHandler } from '../lib/api-client';
 import { createQueryClient } from '../lib/query-client';
 import { AppProviders } from './providers';
 import { createAppRouter } from './router';
 
-function createApp() {
-  const queryClient = createQueryClient();
-  const router = createAppRouter(queryClient);
-  // A lapsed or revoked token: back to sign-in (the client already forgot the token), then drop
-  // every cached answer of the previous session.
+type AppRouter = ReturnType<typeof createBrowserRouter>;
+
+/**
+ * A lapsed or revoked token: back to sign-in (the client has already forgotten the token),
+ * remembering the page, then drop every cached answer of the previous session.
+ */
+export function sendUnauthorizedToSignIn(router: AppRouter, queryClient: QueryClient): void {
   setUnauthorizedHandler(() => {
     const { pathname, search } = router.state.location;
     if (pathname === '/sign-in') return;
     const next = pathname === '/' ? '' : `?next=${encodeURIComponent(pathname + search)}`;
     void router.navigate(`/sign-in${next}`, { replace: true }).then(() => queryClient.clear());
   });
+}
+
+function createApp() {
+  const queryClient = createQueryClient();
+  const router = createAppRouter(queryClient);
+  sendUnauthorizedToSignIn(router, queryClient);
   return { queryClient, router };
 }
 

@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { createBrowserRouter, redirect, type RouteObject } from 'react-router-dom';
+import { createBrowserRouter, Navigate, redirect, type RouteObject } from 'react-router-dom';
 import { PageSpinner } from '../components/page-spinner';
 import { AppLayout, appLayoutLoader } from './routes/app-layout';
 import { NotFoundRoute } from './routes/not-found';
@@ -27,7 +27,7 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
       HydrateFallback: PageSpinner,
       ErrorBoundary: RouteError,
       children: [
-        { index: true, loader: () => redirect('/assets') },
+        { index: true, loader: () => redirect('/assets'), element: <Navigate to="/assets" replace /> },
         {
           ErrorBoundary: RouteError,
           children: [

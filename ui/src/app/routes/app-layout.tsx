@@ -57,7 +57,7 @@ export function AppLayout() {
                     {me.data.email}
                   </Text>
                 </Flex>
-                <Badge variant="soft" aria-label={`Role: ${roleLabel(me.data, assetId)}`}>
+                <Badge variant="soft" title="Your role">
                   {roleLabel(me.data, assetId)}
                 </Badge>
                 <Separator orientation="vertical" size="2" />

@@ -42,11 +42,12 @@ export interface LogRun {
   depthUnit: string;
   start: number;
   stop: number;
-  step: number;
+  /** null when the sampling is irregular. */
+  step: number | null;
   rowCount: number;
   curveCount: number;
   uploadedAt: string;
-  uploadedBy: string;
+  uploadedBy: string | null;
 }
 
 export interface WellRow {
@@ -96,7 +97,7 @@ export interface UploadResult {
   status: UploadStatus;
   logRunId?: string;
   message?: string;
-  line?: number;
+  line?: number | null;
   diagnostics: Diagnostic[];
 }
 

@@ -58,7 +58,7 @@ export function WellRoute() {
         <DataList.Root orientation="horizontal" size="2">
           <DataList.Item>
             <DataList.Label>UWI</DataList.Label>
-            <DataList.Value>{w.uwi ?? '–'}</DataList.Value>
+            <DataList.Value>{w.uwi || '–'}</DataList.Value>
           </DataList.Item>
           <DataList.Item>
             <DataList.Label>Depth range</DataList.Label>

@@ -37,9 +37,7 @@ export function LogRunPanel({ run }: LogRunPanelProps) {
             </DataList.Item>
             <DataList.Item>
               <DataList.Label>Step</DataList.Label>
-              <DataList.Value>
-                {formatNumber(run.step)} {run.depthUnit}
-              </DataList.Value>
+              <DataList.Value>{run.step === null ? 'irregular' : `${formatNumber(run.step)} ${run.depthUnit}`}</DataList.Value>
             </DataList.Item>
             <DataList.Item>
               <DataList.Label>Samples</DataList.Label>
@@ -50,7 +48,8 @@ export function LogRunPanel({ run }: LogRunPanelProps) {
             <DataList.Item>
               <DataList.Label>Loaded</DataList.Label>
               <DataList.Value>
-                {formatDateTime(run.uploadedAt)} by {run.uploadedBy}
+                {formatDateTime(run.uploadedAt)}
+                {run.uploadedBy ? ` by ${run.uploadedBy}` : ''}
               </DataList.Value>
             </DataList.Item>
             <DataList.Item>

@@ -6,8 +6,8 @@ import { z } from 'zod';
 import { useCreateWell } from '../api/create-well';
 
 const newWellSchema = z.object({
-  name: z.string().trim().min(1, { error: 'Give the well a name.' }).max(120, { error: 'Keep the name under 120 characters.' }),
-  uwi: z.string().trim().max(64, { error: 'A UWI is at most 64 characters.' }),
+  name: z.string().trim().min(1, { error: 'Give the well a name.' }).max(80, { error: 'A well name is at most 80 characters.' }),
+  uwi: z.string().trim().max(40, { error: 'A UWI is at most 40 characters.' }),
 });
 
 type NewWellValues = z.infer<typeof newWellSchema>;

@@ -39,7 +39,7 @@ function buildColumns(assetId: string) {
         </Link>
       ),
     }),
-    helper.accessor((row) => row.uwi ?? undefined, {
+    helper.accessor((row) => row.uwi || undefined, {
       id: 'uwi',
       header: 'UWI',
       sortFn: 'alphanumeric',

@@ -7,6 +7,19 @@
  */
 
 // --- LAS reading and writing ---
+export { readLas, DEFAULT_LAS_NULL, DEFAULT_NULL_ALIASES } from './las/read-las.js';
+export { LasParseError } from './las/errors.js';
+export type { LasParseErrorKind, LasDiagnostic } from './las/errors.js';
+export type {
+  LasFile,
+  LasCurve,
+  LasHeaderItem,
+  LasSections,
+  LasRawSection,
+  LasIndexInfo,
+  LasDirection,
+  ReadLasOptions,
+} from './las/types.js';
 
 // --- Units and curve recognition ---
 

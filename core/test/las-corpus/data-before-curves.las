@@ -1,0 +1,15 @@
+~V
+VERS.  2.0 : LAS 2.0
+WRAP.  NO  : one line per step
+~A
+100.0  40.0
+100.5  41.0
+~W
+STRT.FT  100.0 : start
+STOP.FT  100.5 : stop
+STEP.FT  0.5   : step
+NULL.    -999.25 : null
+WELL.    GREENSHANK 23 : well
+~C
+DEPT.FT   : depth
+GR  .GAPI : gamma ray

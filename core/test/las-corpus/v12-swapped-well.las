@@ -1,0 +1,24 @@
+~VERSION INFORMATION
+ VERS.                          1.20:   CWLS LOG ASCII STANDARD -VERSION 1.20
+ WRAP.                          NO:   ONE LINE PER DEPTH STEP
+~WELL INFORMATION BLOCK
+#MNEM.UNIT       DATA TYPE    INFORMATION
+#---------    -------------   ------------------------------
+ STRT.M        820.0000:
+ STOP.M        819.0000:
+ STEP.M        -0.5000:
+ NULL.        -999.2500:
+ COMP.             COMPANY:   HERON RIDGE EXPLORATION
+ WELL.                WELL:   HERON RIDGE 3-22
+ FLD .               FIELD:   HERON RIDGE
+ LOC .            LOCATION:   03-22-041-12W4
+ DATE.            LOG DATE:   14-MAR-1991
+~CURVE INFORMATION
+#MNEM.UNIT      API CODE      CURVE DESCRIPTION
+ DEPT.M                      :  1  DEPTH
+ DT  .US/M     60 520 32 00  :  2  SONIC TRANSIT TIME
+ SP  .MV       07 010 01 00  :  3  SPONTANEOUS POTENTIAL
+~A  DEPTH     DT       SP
+820.000   361.2000  -42.5000
+819.500   358.8000  -44.0000
+819.000   340.1000  -47.2500

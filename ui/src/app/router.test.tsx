@@ -104,11 +104,12 @@ function renderAt(path: string) {
 describe('routes', () => {
   afterEach(() => vi.unstubAllGlobals());
 
-  it('sends a signed-out user from / to the sign-in page', async () => {
-    stubService();
+  it('sends a signed-out user from / to the sign-in page without asking the server anything', async () => {
+    const fetchMock = stubService();
     const router = renderAt('/');
     expect(await screen.findByRole('heading', { name: 'Sign in' })).toBeTruthy();
     expect(router.state.location.pathname).toBe('/sign-in');
+    expect(fetchMock).not.toHaveBeenCalled();
   });
 
   it('signs in and lands on the assets list, with the user and role in the shell', async () => {

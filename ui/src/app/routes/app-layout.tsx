@@ -1,29 +1,18 @@
 import { Badge, Box, Button, Container, Flex, Separator, Text } from '@radix-ui/themes';
 import type { QueryClient } from '@tanstack/react-query';
-import { NavLink, Outlet, redirect, useNavigation, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { NavLink, Outlet, useNavigation, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageSpinner } from '../../components/page-spinner';
 import { Wordmark } from '../../components/wordmark';
-import { meQueryOptions, useMe } from '../../features/auth/api/get-me';
+import { useMe } from '../../features/auth/api/get-me';
 import { useSignOut } from '../../features/auth/hooks/use-sign-out';
 import { roleLabel } from '../../features/auth/utils/permissions';
-import { ApiError } from '../../lib/api-client';
-import { getToken } from '../../lib/auth-token';
+import { requireUser } from './require-user';
 
 /** Every page but sign-in needs a user: no token sends to /sign-in (remembering where to return). */
 export const appLayoutLoader =
   (queryClient: QueryClient) =>
-  async ({ request }: LoaderFunctionArgs) => {
-    const url = new URL(request.url);
-    const here = url.pathname + url.search;
-    const toSignIn = here === '/' ? '/sign-in' : `/sign-in?next=${encodeURIComponent(here)}`;
-    if (!getToken()) throw redirect(toSignIn);
-    try {
-      return await queryClient.ensureQueryData(meQueryOptions());
-    } catch (error) {
-      if (error instanceof ApiError && error.status === 401) throw redirect(toSignIn);
-      throw error;
-    }
-  };
+  ({ request }: LoaderFunctionArgs) =>
+    requireUser(queryClient, request);
 
 /** The shell: product name, main navigation, the signed-in user with their role, sign out. */
 export function AppLayout() {

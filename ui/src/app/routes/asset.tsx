@@ -10,10 +10,12 @@ import { canEditWells, roleInAsset } from '../../features/auth/utils/permissions
 import { useWells, wellsQueryOptions } from '../../features/wells/api/get-wells';
 import { NewWellForm } from '../../features/wells/components/new-well-form';
 import { WellsTable } from '../../features/wells/components/wells-table';
+import { requireUser } from './require-user';
 
 export const assetLoader =
   (queryClient: QueryClient) =>
-  async ({ params }: LoaderFunctionArgs) => {
+  async ({ params, request }: LoaderFunctionArgs) => {
+    await requireUser(queryClient, request);
     const assetId = params.assetId!;
     await Promise.all([queryClient.ensureQueryData(assetQueryOptions(assetId)), queryClient.prefetchQuery(wellsQueryOptions(assetId))]);
     return null;

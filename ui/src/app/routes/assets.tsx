@@ -1,13 +1,18 @@
 import { Callout, Flex, Heading, Text } from '@radix-ui/themes';
 import type { QueryClient } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router-dom';
 import { PageSpinner } from '../../components/page-spinner';
 import { assetsQueryOptions, useAssets } from '../../features/assets/api/get-assets';
 import { AssetsList } from '../../features/assets/components/assets-list';
+import { requireUser } from './require-user';
 
-export const assetsLoader = (queryClient: QueryClient) => async () => {
-  await queryClient.ensureQueryData(assetsQueryOptions());
-  return null;
-};
+export const assetsLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    await requireUser(queryClient, request);
+    await queryClient.ensureQueryData(assetsQueryOptions());
+    return null;
+  };
 
 export function AssetsRoute() {
   const assets = useAssets();

@@ -10,10 +10,12 @@ import { useWell, wellQueryOptions } from '../../features/wells/api/get-well';
 import { LogRunDepthView } from '../../features/wells/components/log-run-depth-view';
 import { LogRunPanel } from '../../features/wells/components/log-run-panel';
 import { formatDepthRange } from '../../lib/format';
+import { requireUser } from './require-user';
 
 export const wellLoader =
   (queryClient: QueryClient) =>
-  async ({ params }: LoaderFunctionArgs) => {
+  async ({ params, request }: LoaderFunctionArgs) => {
+    await requireUser(queryClient, request);
     const assetId = params.assetId!;
     const wellId = params.wellId!;
     await Promise.all([queryClient.ensureQueryData(wellQueryOptions(assetId, wellId)), queryClient.prefetchQuery(assetQueryOptions(assetId))]);

@@ -22,6 +22,14 @@ export type {
 } from './las/types.js';
 
 // --- Units and curve recognition ---
+export { parseUnit, depthUnitOf, feetToMetres, metresToFeet, convertDepths, METRES_PER_FOOT } from './units/units.js';
+export type { UnitInfo, UnitQuantity } from './units/units.js';
+export { normaliseCurveUnits } from './units/normalise-curve-units.js';
+export type { NormalisedCurve } from './units/normalise-curve-units.js';
+export { CURVE_CLASSES, curveClassInfo } from './curves/curve-classes.js';
+export type { CurveClass, CurveClassInfo } from './curves/curve-classes.js';
+export { recogniseCurve } from './curves/recognise-curve.js';
+export type { CurveRecognition } from './curves/recognise-curve.js';
 
 // --- Petrophysics: shale volume, porosity, water resistivity, saturation ---
 

@@ -40,3 +40,66 @@ export { encodeCurveBundle, decodeCurveBundle } from './transfer/curve-bundle.js
 export type { CurveBundle, CurveBundleEntry } from './transfer/curve-bundle.js';
 
 // --- Reserves: volumetrics, gas PVT, Monte Carlo, decline, material balance, inflow ---
+export {
+  FT3_PER_ACRE_FT,
+  FT3_PER_BBL,
+  M_PER_FT,
+  M3_PER_BBL,
+  M2_PER_ACRE,
+  M3_PER_FT3,
+  M2_PER_KM2,
+  BBL_PER_ACRE_FT,
+  RANKINE_OFFSET,
+  DAYS_PER_YEAR,
+} from './reserves/units-constants.js';
+export { STANDARD_CONDITIONS, fahrenheitToRankine } from './reserves/standard-conditions.js';
+export type { StandardConditions } from './reserves/standard-conditions.js';
+export {
+  hydrocarbonPoreVolumeAcreFt,
+  oilInPlace,
+  gasInPlace,
+  recoverable,
+  areaToAcres,
+  lengthToFeet,
+  stbToM3,
+  scfToM3,
+  volumetricsMetric,
+} from './reserves/volumetrics.js';
+export type { AreaUnit, LengthUnit, VolumetricRockInput, VolumetricMetricInput } from './reserves/volumetrics.js';
+export { combineWellInputs, WELL_WEIGHTING_NOTES } from './reserves/well-averages.js';
+export type { WellPayInput, WellWeighting, CombinedWellInputs } from './reserves/well-averages.js';
+export { pseudoCriticalSutton } from './reserves/pseudo-critical.js';
+export type { PseudoCritical } from './reserves/pseudo-critical.js';
+export { zFactorDak } from './reserves/z-factor-dak.js';
+export { zFactorHallYarborough } from './reserves/z-factor-hall-yarborough.js';
+export { gasFvf, gasPvt } from './reserves/gas-fvf.js';
+export type { GasFvfInput, GasPvtInput, GasPvtResult, ZFactorMethod } from './reserves/gas-fvf.js';
+export { normalCdf, normalQuantile, Z_P10 } from './reserves/normal.js';
+export { fillUniform, streamSeed } from './reserves/random.js';
+export {
+  lognormalFromMeanSd,
+  lognormalFromP90P10,
+  lognormalSummary,
+  distributionQuantile,
+  sampleDistribution,
+  checkDistribution,
+} from './reserves/distributions.js';
+export type { Distribution, Truncation, LognormalParams, LognormalSummary } from './reserves/distributions.js';
+export { runMonteCarlo, sampleInputs, perTrial, MAX_TRIALS } from './reserves/monte-carlo.js';
+export type { MonteCarloOptions, MonteCarloRun, VectorModel } from './reserves/monte-carlo.js';
+export { percentilesPrms, exceedanceCurve, PRMS_CONVENTION } from './reserves/percentiles.js';
+export type { PrmsSummary, ExceedanceCurve } from './reserves/percentiles.js';
+export { histogram } from './reserves/histogram.js';
+export type { Histogram, HistogramOptions } from './reserves/histogram.js';
+export { tornado } from './reserves/tornado.js';
+export type { TornadoBase, TornadoOptions, TornadoResult, TornadoRow } from './reserves/tornado.js';
+export { evaluateReservesCase, RESERVES_DISCLAIMER } from './reserves/reserves-case.js';
+export type {
+  ReservesCaseInput,
+  ReservesCaseResult,
+  ReservesGasInput,
+  ReservesInputName,
+  InputSummary,
+  OutputDistribution,
+  VolumePair,
+} from './reserves/reserves-case.js';

@@ -281,14 +281,23 @@ export function sampleDistribution(
       for (let i = 0; i < n; i++) out[i] = a + (uniforms[i] + half) * w;
       break;
     }
+    case 'triangular': {
+      const { a, b, c } = pd;
+      const fc = (c - a) / (b - a);
+      const left = (b - a) * (c - a);
+      const right = (b - a) * (b - c);
+      for (let i = 0; i < n; i++) {
+        const q = lo + (uniforms[i] + half) * span;
+        out[i] = q < fc ? a + Math.sqrt(q * left) : b - Math.sqrt((1 - q) * right);
+      }
+      break;
+    }
     case 'normal':
       for (let i = 0; i < n; i++) out[i] = pd.a + pd.b * normalQuantileFast(lo + (uniforms[i] + half) * span);
       break;
     case 'lognormal':
       for (let i = 0; i < n; i++) out[i] = Math.exp(pd.a + pd.b * normalQuantileFast(lo + (uniforms[i] + half) * span));
       break;
-    default:
-      for (let i = 0; i < n; i++) out[i] = quantileOf(pd, uniforms[i] + half, true);
   }
   return out;
 }

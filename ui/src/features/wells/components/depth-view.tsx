@@ -54,7 +54,7 @@ export function DepthView({ wellName, depthUnit, depth, curves, layout = DEFAULT
               {track.scaleType === 'log' ? ' · log' : ''}
             </text>
             {track.ticks.map((tick) => (
-              <text key={tick.value} x={tick.position} y={headerHeight - 6} textAnchor="middle" className="depth-view__tick">
+              <text key={tick.value} x={tick.position} y={headerHeight - 6} textAnchor={tickAnchor(tick.position, trackWidth)} className="depth-view__tick">
                 {tick.label}
               </text>
             ))}
@@ -79,4 +79,11 @@ export function DepthView({ wellName, depthUnit, depth, curves, layout = DEFAULT
       })}
     </svg>
   );
+}
+
+/** Edge ticks are drawn inside their track so neighbouring tracks' labels never collide. */
+function tickAnchor(position: number, trackWidth: number): 'start' | 'middle' | 'end' {
+  if (position < 12) return 'start';
+  if (position > trackWidth - 12) return 'end';
+  return 'middle';
 }

@@ -32,6 +32,8 @@ export function LasDropZone({ wellName, disabled = false, onFiles }: LasDropZone
 
   return (
     <div
+      role="group"
+      aria-label={`Drop zone for ${wellName}`}
       className="drop-zone"
       data-over={over || undefined}
       data-disabled={disabled || undefined}

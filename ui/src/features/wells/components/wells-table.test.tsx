@@ -103,6 +103,21 @@ describe('WellsTable', () => {
     expect(screen.queryByRole('progressbar', { name: 'Upload progress for Heron-1' })).toBeNull();
   });
 
+  it('uploads LAS files dropped on the well\'s drop zone', async () => {
+    vi.stubGlobal('XMLHttpRequest', FakeXhr);
+    vi.stubGlobal('fetch', vi.fn(async () => jsonResponse(200, wells)));
+    renderWithProviders(<WellsTable assetId="a1" wells={wells} canUpload />);
+
+    const zone = screen.getByRole('group', { name: 'Drop zone for Heron-2' });
+    const dropped = new File(['~V\n'], 'h2.las');
+    fireEvent.dragOver(zone, { dataTransfer: { types: ['Files'], files: [dropped] } });
+    fireEvent.drop(zone, { dataTransfer: { types: ['Files'], files: [dropped] } });
+
+    await waitFor(() => expect(FakeXhr.requests).toHaveLength(1));
+    expect(FakeXhr.requests[0].url).toBe('/api/assets/a1/wells/w2/log-runs');
+    expect((FakeXhr.requests[0].body as FormData).getAll('files').map((f) => (f as File).name)).toEqual(['h2.las']);
+  });
+
   it('shows the per-file reasons when the server rejects every file (400 with results)', async () => {
     vi.stubGlobal('XMLHttpRequest', FakeXhr);
     vi.stubGlobal('fetch', vi.fn(async () => jsonResponse(200, wells)));

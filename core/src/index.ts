@@ -8,6 +8,8 @@
 
 // --- LAS reading and writing ---
 export { readLas, DEFAULT_LAS_NULL, DEFAULT_NULL_ALIASES } from './las/read-las.js';
+export { writeLas } from './las/write-las.js';
+export type { LasWriteInput, LasWriteCurve, LasWriteItem, WriteLasOptions } from './las/write-las.js';
 export { LasParseError } from './las/errors.js';
 export type { LasParseErrorKind, LasDiagnostic } from './las/errors.js';
 export type {

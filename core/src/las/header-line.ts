@@ -25,7 +25,9 @@ function lastDelimiterColon(text: string, from: number): number {
     else if (ch === 123 /* { */ && depth > 0) depth--;
     else if (ch === 58 /* : */ && depth === 0) return i;
   }
-  return -1;
+  // Unbalanced braces (a stray '}' in a description): fall back to the plain last colon.
+  const plain = text.lastIndexOf(':');
+  return plain >= from ? plain : -1;
 }
 
 function isBlank(ch: number): boolean {

@@ -1,0 +1,395 @@
+/**
+ * evaluateWell: the whole evaluation of one well in one call, the same in the service and
+ * in the browser. Curves + zones (each with its parameters) + cutoffs per formation (+ an
+ * optional deviation survey) -> computed curves, a QC mask, zone summaries and warnings.
+ *
+ * Per zone, one plain loop over the zone's samples computes, with the shared per-sample
+ * kernels: VSH (GR index clipped to [0, 1], then the method), PHIT (clamped to [0, phiMax]),
+ * PHIE (= PHIT - VSH * phiShale, clamped to [0, PHIT]), SW (model, clamped to [0, 1], Rw
+ * corrected by Arps to each sample's formation temperature), BVW = PHIE * SW, PERM (when the
+ * zone has a transform), NET_RES and NET_PAY (1 / 0 / NaN). Samples outside every zone are
+ * NaN. Clamps are recorded in the QC mask (see qc.ts) and counted in the summaries.
+ * Conventions: EVALUATION_CONVENTIONS.
+ */
+import { densityPorosity, neutronDensityGasPorosity, neutronDensityPorosity } from '../petro/porosity.js';
+import { type PickettFit, pickettFit } from '../petro/pickett.js';
+import { permeabilityFrom } from '../petro/permeability.js';
+import { archieSaturation, indonesiaSaturation, simandouxSaturation } from '../petro/saturation.js';
+import { gammaRayPercentiles, vshFromIndex } from '../petro/shale-volume.js';
+import { sonicPorosityRhg, sonicPorosityWyllie } from '../petro/sonic-porosity.js';
+import { temperatureLine } from '../petro/temperature.js';
+import { arpsOffset, rwFromSsp } from '../petro/water-resistivity.js';
+import { positionsAtMd } from '../survey/minimum-curvature.js';
+import { type ParameterIssue, throwIfIssues } from './errors.js';
+import { type CutoffTable, type ZoneInterval, cutoffIssues, formationOf, payFlag, reservoirFlag } from './cutoffs.js';
+import { QC_PHIE_CLAMPED, QC_PHIT_CLAMPED, QC_SW_CLAMPED, QC_SW_NO_ROOT, QC_VSH_CLIPPED } from './qc.js';
+import { type SampleGeometry, type SurveyInput, geometryPositionAt, sampleGeometry } from './sample-geometry.js';
+import { type ZoneRange, depthIssues, lowerBound, zoneBoundsIssues, zoneRangesUnchecked } from './sample-thickness.js';
+import { type ZoneParameters, validateZoneParameters } from './zone-parameters.js';
+import { type ZoneSummary, summariseUnchecked } from './zone-summary.js';
+
+type Curve = Float64Array | readonly number[];
+
+/** Input curves in canonical units: gAPI, g/cm3, v/v, us/ft, ohm.m, mV; NaN = missing. */
+export interface WellCurves {
+  gr?: Curve;
+  rhob?: Curve;
+  /** Neutron porosity, v/v, on the zone's matrix. */
+  nphi?: Curve;
+  dt?: Curve;
+  /** Deep (true) resistivity. */
+  rt?: Curve;
+  /** Spontaneous potential, used only by an Rw source `{ kind: 'ssp', ssp: null }`. */
+  sp?: Curve;
+}
+
+export interface EvaluationZone extends ZoneInterval {
+  params: ZoneParameters;
+}
+
+export interface EvaluateWellInput {
+  /** Measured depth of each sample, strictly increasing. */
+  depth: Curve;
+  depthUnit: 'ft' | 'm';
+  curves: WellCurves;
+  /** Zones (any order, not overlapping, inside the logged interval). */
+  zones: readonly EvaluationZone[];
+  /** Cutoffs per formation name (zone.formation, or zone.name when unset). */
+  cutoffs: CutoffTable;
+  /** Optional deviation survey (stations or a TVD table) for TVD/TVT and temperature. */
+  survey?: SurveyInput;
+  options?: { /** Compute zone summaries (default true). */ summaries?: boolean };
+}
+
+export interface EvaluationWarning {
+  zone: string | null;
+  field?: string;
+  message: string;
+}
+
+/** What each zone actually used after picks and fits (for display and audit). */
+export interface ResolvedZoneParameters {
+  zone: string;
+  grClean: number;
+  grShale: number;
+  /** Rw at the reference temperature, ohm.m, and that temperature (zone unit). */
+  rwReference: number;
+  rwReferenceTemperature: number;
+  /** Cementation exponent used (the Pickett slope when fitM). */
+  m: number;
+  pickett: PickettFit | null;
+  /** SSP used (mV), when the Rw source is SP. */
+  ssp: number | null;
+}
+
+export interface EvaluatedCurves {
+  VSH: Float64Array;
+  PHIT: Float64Array;
+  PHIE: Float64Array;
+  SW: Float64Array;
+  BVW: Float64Array;
+  /** mD; null when no zone has a permeability transform. */
+  PERM: Float64Array | null;
+  /** 1 / 0 / NaN */
+  NET_RES: Float64Array;
+  NET_PAY: Float64Array;
+}
+
+export interface EvaluateWellResult {
+  curves: EvaluatedCurves;
+  /** Per-sample QC bits (QC_* constants). */
+  qc: Uint8Array;
+  zones: ZoneSummary[];
+  resolved: ResolvedZoneParameters[];
+  warnings: EvaluationWarning[];
+  /** Sample geometry from the survey (null without one); pass it to summariseZones to reuse. */
+  geometry: SampleGeometry | null;
+}
+
+const CURVE_KEYS = ['gr', 'rhob', 'nphi', 'dt', 'rt', 'sp'] as const;
+
+function requiredCurves(p: ZoneParameters): (keyof WellCurves)[] {
+  const need: (keyof WellCurves)[] = ['gr', 'rt'];
+  if (p.porosityMethod === 'density') need.push('rhob');
+  else if (p.porosityMethod === 'neutron_density' || p.porosityMethod === 'neutron_density_gas') need.push('rhob', 'nphi');
+  else need.push('dt');
+  if (p.rw?.kind === 'ssp' && p.rw.ssp === null) need.push('sp');
+  return need;
+}
+
+function inputIssues(input: EvaluateWellInput): ParameterIssue[] {
+  const { depth, curves, zones, cutoffs } = input;
+  const issues: ParameterIssue[] = [...depthIssues(depth)];
+  if (input.depthUnit !== 'ft' && input.depthUnit !== 'm') issues.push({ zone: null, field: 'depthUnit', message: "depthUnit must be 'ft' or 'm'" });
+  for (const k of CURVE_KEYS) {
+    const c = curves[k];
+    if (c && c.length !== depth.length) issues.push({ zone: null, field: `curves.${k}`, message: `curves.${k} has ${c.length} samples, expected ${depth.length}` });
+  }
+  if (zones.length === 0) issues.push({ zone: null, field: 'zones', message: 'zones must not be empty' });
+  if (issues.length === 0) issues.push(...zoneBoundsIssues(depth, zones));
+  for (const z of zones) {
+    const p = z.params;
+    if (!p || typeof p !== 'object') {
+      issues.push({ zone: z.name, field: 'params', message: 'params are missing' });
+      continue;
+    }
+    issues.push(...validateZoneParameters(p, z.name));
+    for (const k of requiredCurves(p)) {
+      if (!curves[k]) issues.push({ zone: z.name, field: `curves.${k}`, message: `curves.${k} is required by this zone's methods` });
+    }
+    const c = cutoffs[formationOf(z)];
+    issues.push(...cutoffIssues(c, z.name, formationOf(z)));
+    if (c && c.permMin != null && p.permeability === null) {
+      issues.push({ zone: z.name, field: 'permeability', message: `permeability must be set: formation '${formationOf(z)}' has a permMin cutoff` });
+    }
+    if (p.rw?.kind === 'pickett' && Number.isFinite(p.rw.top) && Number.isFinite(p.rw.base)) {
+      if (p.rw.top < z.top || p.rw.top >= z.base) issues.push({ zone: z.name, field: 'rw.top', message: `rw.top (${p.rw.top}) must lie inside the zone [${z.top}, ${z.base}]` });
+      if (p.rw.base > z.base || p.rw.base <= z.top) issues.push({ zone: z.name, field: 'rw.base', message: `rw.base (${p.rw.base}) must lie inside the zone [${z.top}, ${z.base}]` });
+    }
+    if ((z.dipDeg !== undefined && !(Math.abs(z.dipDeg) < 90)) || (z.dipAzimuthDeg !== undefined && !Number.isFinite(z.dipAzimuthDeg))) {
+      issues.push({ zone: z.name, field: 'dipDeg', message: 'dipDeg must be in (-90, 90) and dipAzimuthDeg finite' });
+    }
+  }
+  return issues;
+}
+
+const VSH_CODE = { linear: 0, larionov_tertiary: 1, larionov_older: 2, steiber: 3, clavier: 4 } as const;
+const POR_CODE = { density: 0, neutron_density: 1, neutron_density_gas: 2, sonic_wyllie: 3, sonic_rhg: 4 } as const;
+const SW_CODE = { archie: 0, simandoux: 1, indonesia: 2 } as const;
+const NO_CURVE = new Float64Array(0);
+
+/** Porosity (PHIT, unclamped) of sample i by the zone's method (kernel dispatch). */
+function totalPorosityAt(code: number, p: ZoneParameters, c: Required<Record<'rhob' | 'nphi' | 'dt', Curve>>, i: number): number {
+  switch (code) {
+    case 0:
+      return densityPorosity(c.rhob[i], p.rhoMatrix, p.rhoFluid);
+    case 1:
+      return neutronDensityPorosity(c.nphi[i], densityPorosity(c.rhob[i], p.rhoMatrix, p.rhoFluid));
+    case 2:
+      return neutronDensityGasPorosity(c.nphi[i], densityPorosity(c.rhob[i], p.rhoMatrix, p.rhoFluid));
+    case 3:
+      return sonicPorosityWyllie(c.dt[i], p.dtMatrix, p.dtFluid, p.sonicCompaction);
+    default:
+      return sonicPorosityRhg(c.dt[i], p.dtMatrix, p.dtFluid);
+  }
+}
+
+/**
+ * Evaluates a well: see the file comment and EVALUATION_CONVENTIONS.
+ * Throws EvaluationInputError (a RangeError) listing every problem, each naming the zone and
+ * field: bad depth, curves of the wrong length or missing for a zone's method, zones outside
+ * the logged interval or overlapping, invalid parameters (rhoMatrix = rhoFluid, m <= 0,
+ * rw <= 0, ...), missing or invalid cutoffs, a Pickett interval outside its zone; and, after
+ * the checks, a Pickett fit or SP pick that cannot be made (RangeError naming the zone).
+ * @example
+ * const r = evaluateWell({ depth, depthUnit: 'ft', curves: { gr, rhob, rt }, zones: [{ name: 'A Sand', top: 5000, base: 5100,
+ *   params: defaultZoneParameters('sandstone') }], cutoffs: { 'A Sand': { vshMax: 0.4, phiMin: 0.08, swMax: 0.6 } } });
+ * r.zones[0].netPay.thickness.md
+ */
+export function evaluateWell(input: EvaluateWellInput): EvaluateWellResult {
+  const fn = 'evaluateWell';
+  throwIfIssues(fn, inputIssues(input));
+  const { depth, curves, zones, cutoffs } = input;
+  const n = depth.length;
+  const warnings: EvaluationWarning[] = [];
+  const geometry = input.survey ? sampleGeometry(depth, input.survey) : null;
+  // TVD at each sample (for temperature): from the survey, else measured depth.
+  const tvdCentre: Curve = geometry ? positionsAtMd(geometry.path, depth).tvd : depth;
+  const tvdAt = (md: number): number => (geometry ? geometryPositionAt(geometry, md).tvd : md);
+  const ranges = zoneRangesUnchecked(depth, zones);
+  const anyPerm = zones.some((z) => z.params.permeability !== null);
+
+  const VSH = new Float64Array(n), PHIT = new Float64Array(n), PHIE = new Float64Array(n), SW = new Float64Array(n);
+  const BVW = new Float64Array(n), NET_RES = new Float64Array(n), NET_PAY = new Float64Array(n);
+  const PERM = anyPerm ? new Float64Array(n) : null;
+  const qc = new Uint8Array(n);
+  const out: EvaluatedCurves = { VSH, PHIT, PHIE, SW, BVW, PERM, NET_RES, NET_PAY };
+  const resolved: ResolvedZoneParameters[] = [];
+
+  zones.forEach((z, k) => {
+    const r = ranges[k];
+    resolved.push(evaluateZone(z, r, input, tvdCentre, tvdAt, out, qc, cutoffs, warnings));
+  });
+  fillOutside(out, ranges, n);
+
+  const summaries =
+    input.options?.summaries === false
+      ? []
+      : summariseUnchecked(depth, { VSH, PHIE, SW, PERM: PERM ?? undefined }, qc, zones, cutoffs, ranges, geometry ?? undefined);
+  for (const s of summaries) zoneWarnings(s, input.depthUnit, warnings);
+  for (const z of zones) {
+    if ((z.dipDeg ?? 0) !== 0 && (!geometry || !geometry.hasHorizontal)) {
+      warnings.push({ zone: z.name, field: 'dipDeg', message: 'formation dip is ignored: TVT needs a survey with north/east positions' });
+    }
+  }
+  return { curves: out, qc, zones: summaries, resolved, warnings, geometry };
+}
+
+function evaluateZone(
+  z: EvaluationZone,
+  r: ZoneRange,
+  input: EvaluateWellInput,
+  tvdC: Curve,
+  tvdAt: (md: number) => number,
+  out: EvaluatedCurves,
+  qc: Uint8Array,
+  cutoffs: CutoffTable,
+  warnings: EvaluationWarning[],
+): ResolvedZoneParameters {
+  const p = z.params;
+  const { curves, depth } = input;
+  const s = r.computeStart, e = r.computeEnd;
+  const gr = curves.gr!, rt = curves.rt!;
+  const por = { rhob: curves.rhob ?? NO_CURVE, nphi: curves.nphi ?? NO_CURVE, dt: curves.dt ?? NO_CURVE };
+  const where = (field: string, msg: string) => new RangeError(`evaluateWell: zone '${z.name}': ${field} ${msg}`);
+
+  // GR picks.
+  let grClean: number, grShale: number;
+  if (p.grClean !== null && p.grShale !== null) {
+    grClean = p.grClean;
+    grShale = p.grShale;
+  } else {
+    try {
+      ({ grClean, grShale } = gammaRayPercentiles(gr, s, e, p.grCleanPercentile, p.grShalePercentile));
+    } catch (err) {
+      throw where('grClean', `cannot be picked from GR percentiles: ${(err as Error).message}`);
+    }
+  }
+
+  // Temperature line and Rw at a reference temperature.
+  const { t0, slope } = temperatureLine(p.temperature);
+  const unit = p.temperatureUnit;
+  const kArps = arpsOffset(unit);
+  const porCode = POR_CODE[p.porosityMethod];
+  let m = p.m;
+  let rwRef: number, tRef: number, pickett: PickettFit | null = null, ssp: number | null = null;
+  if (p.rw.kind === 'at_temperature') {
+    rwRef = p.rw.rw;
+    tRef = p.rw.temperature;
+  } else if (p.rw.kind === 'ssp') {
+    tRef = t0 + slope * tvdAt(0.5 * (z.top + z.base));
+    ssp = p.rw.ssp;
+    if (ssp === null) {
+      try {
+        const q = gammaRayPercentiles(curves.sp!, s, e, 5, 95);
+        ssp = q.grClean - q.grShale;
+      } catch (err) {
+        throw where('rw.ssp', `cannot be picked from the SP curve: ${(err as Error).message}`);
+      }
+    }
+    rwRef = rwFromSsp({ ssp, rmf: p.rw.rmf, rmfTemperature: p.rw.rmfTemperature, formationTemperature: tRef, temperatureUnit: unit });
+    if (rwRef < 0.1) warnings.push({ zone: z.name, field: 'rw.ssp', message: `Rw from SP is ${rwRef.toPrecision(3)} ohm.m: below about 0.1 ohm.m Rwe differs from Rw (no chart correction applied)` });
+  } else {
+    const a0 = lowerBound(depth, p.rw.top), a1 = lowerBound(depth, p.rw.base);
+    const phi = new Float64Array(a1 - a0), rtw = new Float64Array(a1 - a0);
+    for (let i = a0; i < a1; i++) {
+      const vsh = gr[i] === gr[i] ? vshFromIndex(p.vshMethod, clip01((gr[i] - grClean) / (grShale - grClean))) : NaN;
+      const phit = Math.min(Math.max(totalPorosityAt(porCode, p, por, i), 0), p.phiMax);
+      phi[i - a0] = p.phiShale === 0 ? phit : Math.min(Math.max(phit - vsh * p.phiShale, 0), phit);
+      rtw[i - a0] = rt[i];
+    }
+    try {
+      pickett = pickettFit(phi, rtw);
+    } catch (err) {
+      throw where('rw', `Pickett fit failed on [${p.rw.top}, ${p.rw.base}]: ${(err as Error).message}`);
+    }
+    if (p.rw.fitM) m = pickett.m;
+    rwRef = pickett.aRw / p.a;
+    tRef = t0 + slope * tvdAt(0.5 * (p.rw.top + p.rw.base));
+    if (pickett.r2 < 0.9) warnings.push({ zone: z.name, field: 'rw', message: `Pickett fit is poor (r2 = ${pickett.r2.toFixed(3)} over ${pickett.count} samples)` });
+    if (!(m > 0)) throw where('m', `from the Pickett fit must be > 0 (got ${m})`);
+  }
+  // Rw at sample i: rwRef (tRef + k) / (T_i + k), T_i = t0 + slope * tvd_i.
+  const rwNum = rwRef * (tRef + kArps);
+  const tk = t0 + kArps;
+
+  const c = cutoffs[formationOf(z)];
+  const permMin = c.permMin ?? -Infinity;
+  const vshCode = VSH_CODE[p.vshMethod], swCode = SW_CODE[p.swModel];
+  const { VSH, PHIT, PHIE, SW, BVW, PERM, NET_RES, NET_PAY } = out;
+  const invGr = 1 / (grShale - grClean);
+  const { phiShale, phiMax, a, n } = p;
+  const rsh = p.rsh ?? NaN;
+  const permMethod = p.permeability?.method ?? 'timur';
+  const swIrr = p.permeability?.swIrr ?? null;
+  const doPerm = PERM !== null && p.permeability !== null;
+  let noRoot = 0;
+
+  for (let i = s; i < e; i++) {
+    let q = 0;
+    // Shale volume.
+    const g = gr[i];
+    let igr = (g - grClean) * invGr;
+    if (igr < 0) { igr = 0; q |= QC_VSH_CLIPPED; } else if (igr > 1) { igr = 1; q |= QC_VSH_CLIPPED; }
+    let vsh: number;
+    if (g !== g) vsh = NaN;
+    else if (vshCode === 0) vsh = igr;
+    else vsh = vshFromIndex(p.vshMethod, igr);
+    // Porosity.
+    let phit = porCode === 0 ? densityPorosity(por.rhob[i], p.rhoMatrix, p.rhoFluid) : totalPorosityAt(porCode, p, por, i);
+    if (phit < 0) { phit = 0; q |= QC_PHIT_CLAMPED; } else if (phit > phiMax) { phit = phiMax; q |= QC_PHIT_CLAMPED; }
+    let phie = phit;
+    if (phiShale !== 0) {
+      phie = phit - vsh * phiShale;
+      if (phie < 0) { phie = 0; q |= QC_PHIE_CLAMPED; } else if (phie > phit) { phie = phit; q |= QC_PHIE_CLAMPED; }
+    }
+    // Water saturation.
+    const rw = rwNum / (tk + slope * tvdC[i]);
+    let sw: number;
+    if (swCode === 0) sw = archieSaturation(phie, rt[i], rw, a, m, n);
+    else if (swCode === 1) sw = simandouxSaturation(phie, rt[i], vsh, rw, rsh, a, m, n);
+    else sw = indonesiaSaturation(phie, rt[i], vsh, rw, rsh, a, m, n);
+    if (sw < 0) { sw = 0; q |= QC_SW_CLAMPED; } else if (sw > 1) { sw = 1; q |= QC_SW_CLAMPED; } else if (sw !== sw && swCode === 1 && n !== 2 && phie === phie && rt[i] === rt[i] && vsh === vsh) {
+      q |= QC_SW_NO_ROOT;
+      noRoot++;
+    }
+    VSH[i] = vsh;
+    PHIT[i] = phit;
+    PHIE[i] = phie;
+    SW[i] = sw;
+    BVW[i] = phie * sw;
+    let perm = NaN;
+    if (doPerm) {
+      perm = permeabilityFrom(permMethod, phie, swIrr ?? sw);
+      PERM![i] = perm;
+    } else if (PERM !== null) PERM[i] = NaN;
+    const res = reservoirFlag(vsh, phie, perm, c.vshMax, c.phiMin, permMin);
+    NET_RES[i] = res;
+    NET_PAY[i] = payFlag(res, sw, c.swMax);
+    qc[i] = q;
+  }
+  if (noRoot > 0) warnings.push({ zone: z.name, field: 'n', message: `Simandoux did not converge on ${noRoot} samples (SW left empty)` });
+  return { zone: z.name, grClean, grShale, rwReference: rwRef, rwReferenceTemperature: tRef, m, pickett, ssp };
+}
+
+function clip01(x: number): number {
+  return x < 0 ? 0 : x > 1 ? 1 : x;
+}
+
+/** NaN in every output outside the zones' compute ranges. */
+function fillOutside(out: EvaluatedCurves, ranges: readonly ZoneRange[], n: number): void {
+  const sorted = [...ranges].sort((a, b) => a.computeStart - b.computeStart);
+  const arrays = [out.VSH, out.PHIT, out.PHIE, out.SW, out.BVW, out.NET_RES, out.NET_PAY, ...(out.PERM ? [out.PERM] : [])];
+  let from = 0;
+  for (const r of [...sorted, { computeStart: n, computeEnd: n }]) {
+    if (r.computeStart > from) for (const a of arrays) a.fill(NaN, from, r.computeStart);
+    from = Math.max(from, r.computeEnd);
+  }
+}
+
+function zoneWarnings(s: ZoneSummary, unit: string, warnings: EvaluationWarning[]): void {
+  if (s.nullCount > 0) {
+    warnings.push({ zone: s.zone, message: `${s.nullCount} samples (${s.nullThickness.toFixed(2)} ${unit}) have no net pay flag: a needed value (VSH, PHIE, SW or PERM) is missing` });
+  }
+  const share = (k: number) => (s.sampleCount > 0 ? k / s.sampleCount : 0);
+  const named: [keyof ZoneSummary['clamped'], string, string][] = [
+    ['phit', 'phiMax', 'PHIT clamped to [0, phiMax]'],
+    ['phie', 'phiShale', 'PHIE clamped to [0, PHIT]'],
+    ['sw', 'rw', 'SW clamped to [0, 1]'],
+  ];
+  for (const [key, field, what] of named) {
+    if (share(s.clamped[key]) > 0.05) {
+      warnings.push({ zone: s.zone, field, message: `${s.clamped[key]} of ${s.sampleCount} samples (${(100 * share(s.clamped[key])).toFixed(1)}%) had ${what}` });
+    }
+  }
+}

@@ -72,6 +72,8 @@ class Reader {
   delimiter: LasFile['delimiter'] = 'space';
   encoding: LasFile['encoding'] = 'utf-8';
   curvesSeen = false;
+  /** Set once the data section is read: curve definitions are then final. */
+  dataRead = false;
   curvesLine: number | null = null;
   private readonly otherLines: string[] = [];
 
@@ -104,6 +106,11 @@ class Reader {
         continue;
       }
       if (r.kind === 'extra') {
+        this.sections.extra.push({ name: r.title.trim(), line: r.headerLine, lines: lines.map((l) => l.trimEnd()) });
+        continue;
+      }
+      if (r.kind === 'curves' && this.dataRead) {
+        this.log.add('warning', r.headerLine, `line ${r.headerLine}: a ~Curve section after the data is ignored (kept as text)`);
         this.sections.extra.push({ name: r.title.trim(), line: r.headerLine, lines: lines.map((l) => l.trimEnd()) });
         continue;
       }
@@ -211,6 +218,7 @@ class Reader {
       const r = fast ? scanDataFast(this.bytes, start, params) : scanDataGeneral(this.bytes, start, params);
       return { ...r, wrapped, log };
     };
+    this.dataRead = true;
     let r = run(this.wrapped);
     const bad = (x: DataScanResult) => x.rows > 0 && x.mismatchedRows * 2 > x.rows;
     if (bad(r) && !this.wrapped && nc > 1) {

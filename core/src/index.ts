@@ -105,3 +105,26 @@ export type {
   OutputDistribution,
   VolumePair,
 } from './reserves/reserves-case.js';
+export {
+  arpsRate,
+  arpsRates,
+  arpsCumulative,
+  arpsTimeToRate,
+  arpsEur,
+  nominalToEffective,
+  effectiveToNominal,
+} from './reserves/decline.js';
+export type { ArpsKind, ArpsParams, ArpsEur } from './reserves/decline.js';
+export { fitArpsDecline } from './reserves/decline-fit.js';
+export type { ArpsFit, ArpsFitOptions } from './reserves/decline-fit.js';
+export { fitPZ, pzCumulativeAt, PZ_METHOD } from './reserves/material-balance.js';
+export type { PZFit, PZInput } from './reserves/material-balance.js';
+export { wellsNeeded, drainageAreaFromGas, WELL_COUNT_ASSUMPTIONS } from './reserves/well-count.js';
+export type { WellCount } from './reserves/well-count.js';
+export {
+  radialInflowRate,
+  joshiHorizontalRate,
+  RADIAL_FLOW_CONSTANT,
+  DARCY_FIELD_CONSTANT,
+} from './reserves/inflow.js';
+export type { RadialInflowInput, JoshiInput, JoshiResult, InflowResult } from './reserves/inflow.js';

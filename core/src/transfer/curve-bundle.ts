@@ -1,3 +1,5 @@
+import { decodeUtf8Strict, encodeUtf8 } from '../las/text.js';
+
 /**
  * Curve bundle: a compact binary frame that carries several sample arrays (one per curve)
  * with their names and units, so the browser receives a log run's samples in one response
@@ -33,7 +35,7 @@ export function encodeCurveBundle(entries: readonly CurveBundleEntry[], values: 
   values.forEach((v, i) => {
     if (v.length !== n) throw new RangeError(`encodeCurveBundle: curve ${entries[i].mnemonic} has ${v.length} samples, expected ${n}`);
   });
-  const header = new TextEncoder().encode(JSON.stringify({ version: 1, length: n, curves: entries }));
+  const header = encodeUtf8(JSON.stringify({ version: 1, length: n, curves: entries }));
   const dataStart = Math.ceil((8 + header.length) / 8) * 8;
   const out = new Uint8Array(dataStart + 8 * n * values.length);
   out.set(MAGIC, 0);
@@ -53,7 +55,9 @@ export function decodeCurveBundle(bytes: Uint8Array): CurveBundle {
   const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   const headerLength = view.getUint32(4, true);
   if (8 + headerLength > bytes.length) throw new RangeError('decodeCurveBundle: truncated header');
-  const header = JSON.parse(new TextDecoder().decode(bytes.subarray(8, 8 + headerLength))) as {
+  const text = decodeUtf8Strict(bytes.subarray(8, 8 + headerLength));
+  if (text === null) throw new RangeError('decodeCurveBundle: header is not UTF-8');
+  const header = JSON.parse(text) as {
     version: number;
     length: number;
     curves: CurveBundleEntry[];

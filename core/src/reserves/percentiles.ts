@@ -1,4 +1,4 @@
-import { mean as ssMean, quantileSorted, standardDeviation } from 'simple-statistics';
+import { mean as ssMean, quantile, standardDeviation } from 'simple-statistics';
 
 /**
  * PRMS percentile convention (SPE/WPC/AAPG/SPEE/SEG/SPWLA/EAGE 2018, Petroleum Resources
@@ -28,8 +28,8 @@ export interface PrmsSummary {
   missing: number;
 }
 
-/** Finite samples copied and sorted ascending, and the number of NaN skipped. (Internal.) */
-export function sortFinite(samples: Float64Array | readonly number[]): { sorted: Float64Array; missing: number } {
+/** Finite samples copied (NaN removed) and the number of NaN skipped. (Internal.) */
+export function finiteCopy(samples: Float64Array | readonly number[]): { finite: Float64Array; missing: number } {
   const n = samples.length;
   const out = new Float64Array(n);
   let k = 0;
@@ -37,40 +37,54 @@ export function sortFinite(samples: Float64Array | readonly number[]): { sorted:
     const v = samples[i];
     if (!Number.isNaN(v)) out[k++] = v;
   }
-  const sorted = k === n ? out : out.slice(0, k);
-  sorted.sort();
-  return { sorted, missing: n - k };
+  return { finite: k === n ? out : out.slice(0, k), missing: n - k };
 }
 
-/** {@link percentilesPrms} on data already sorted by {@link sortFinite}. (Internal.) */
-export function percentilesFromSorted(sorted: Float64Array, missing: number): PrmsSummary {
-  if (sorted.length === 0) throw new RangeError('percentilesPrms: samples has no finite value');
-  const xs = sorted as unknown as readonly number[];
+/**
+ * Several type-7 quantiles at once by simple-statistics `quantile(x, p[])` (multi-quickselect on
+ * a copy, O(n log k), no full sort). (Internal.)
+ */
+export function quantilesOf(finite: Float64Array, probs: readonly number[]): number[] {
+  return quantile(finite as unknown as number[], probs as number[]) as number[];
+}
+
+/** {@link percentilesPrms} of finite samples, given their P90/P50/P10. (Internal.) */
+export function summaryFrom(finite: Float64Array, missing: number, p90: number, p50: number, p10: number): PrmsSummary {
+  const xs = finite as unknown as readonly number[];
+  let min = Infinity;
+  let max = -Infinity;
+  for (let i = 0; i < finite.length; i++) {
+    const v = finite[i];
+    if (v < min) min = v;
+    if (v > max) max = v;
+  }
   return {
-    p90: quantileSorted(xs, 0.1),
-    p50: quantileSorted(xs, 0.5),
-    p10: quantileSorted(xs, 0.9),
+    p90,
+    p50,
+    p10,
     mean: ssMean(xs),
-    sd: sorted.length > 1 ? standardDeviation(xs) : 0,
-    min: sorted[0],
-    max: sorted[sorted.length - 1],
-    count: sorted.length,
+    sd: finite.length > 1 ? standardDeviation(xs) : 0,
+    min,
+    max,
+    count: finite.length,
     missing,
   };
 }
 
 /**
  * P90, P50, P10 (PRMS 2018 exceedance convention, see {@link PRMS_CONVENTION}), mean and
- * standard deviation of Monte Carlo samples. Quantiles by simple-statistics `quantileSorted`
- * (linear interpolation between order statistics, Hyndman & Fan 1996 type 7); mean by its
- * compensated sum. NaN samples are skipped and counted in `missing`.
+ * standard deviation of Monte Carlo samples. Quantiles by simple-statistics `quantile`
+ * (linear interpolation between order statistics, Hyndman & Fan 1996 type 7, found by
+ * quickselect); mean by its compensated sum. NaN samples are skipped and counted in `missing`.
  *
  * @throws RangeError('percentilesPrms: samples has no finite value')
  * @example percentilesPrms([1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11]) // { p90: 2, p50: 6, p10: 10, ... }
  */
 export function percentilesPrms(samples: Float64Array | readonly number[]): PrmsSummary {
-  const { sorted, missing } = sortFinite(samples);
-  return percentilesFromSorted(sorted, missing);
+  const { finite, missing } = finiteCopy(samples);
+  if (finite.length === 0) throw new RangeError('percentilesPrms: samples has no finite value');
+  const [p90, p50, p10] = quantilesOf(finite, [0.1, 0.5, 0.9]);
+  return summaryFrom(finite, missing, p90, p50, p10);
 }
 
 /** Points of an exceedance ("probability greater than") curve, for the cumulative plot. */
@@ -81,18 +95,17 @@ export interface ExceedanceCurve {
   value: Float64Array;
 }
 
-/** {@link exceedanceCurve} on sorted data. (Internal.) */
-export function exceedanceFromSorted(sorted: Float64Array, points: number): ExceedanceCurve {
-  if (sorted.length === 0) throw new RangeError('exceedanceCurve: samples has no finite value');
+/** Cumulative probabilities 0, 1/(points-1), ..., 1 of an exceedance curve. (Internal.) */
+export function exceedanceProbabilities(points: number): number[] {
+  return Array.from({ length: points }, (_, i) => i / (points - 1));
+}
+
+/** Builds an {@link ExceedanceCurve} from quantiles at {@link exceedanceProbabilities}. (Internal.) */
+export function exceedanceFromQuantiles(values: readonly number[]): ExceedanceCurve {
+  const points = values.length;
   const exceedance = new Float64Array(points);
-  const value = new Float64Array(points);
-  const xs = sorted as unknown as readonly number[];
-  for (let i = 0; i < points; i++) {
-    const p = i / (points - 1);
-    exceedance[i] = 1 - p;
-    value[i] = quantileSorted(xs, p);
-  }
-  return { exceedance, value };
+  for (let i = 0; i < points; i++) exceedance[i] = 1 - i / (points - 1);
+  return { exceedance, value: Float64Array.from(values) };
 }
 
 /**
@@ -105,5 +118,7 @@ export function exceedanceFromSorted(sorted: Float64Array, points: number): Exce
  */
 export function exceedanceCurve(samples: Float64Array | readonly number[], points = 101): ExceedanceCurve {
   if (!Number.isInteger(points) || points < 2) throw new RangeError(`exceedanceCurve: points must be an integer >= 2 (got ${points})`);
-  return exceedanceFromSorted(sortFinite(samples).sorted, points);
+  const { finite } = finiteCopy(samples);
+  if (finite.length === 0) throw new RangeError('exceedanceCurve: samples has no finite value');
+  return exceedanceFromQuantiles(quantilesOf(finite, exceedanceProbabilities(points)));
 }

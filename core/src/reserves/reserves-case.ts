@@ -6,9 +6,11 @@ import {
   type ExceedanceCurve,
   type PrmsSummary,
   PRMS_CONVENTION,
-  exceedanceFromSorted,
-  percentilesFromSorted,
-  sortFinite,
+  exceedanceFromQuantiles,
+  exceedanceProbabilities,
+  finiteCopy,
+  quantilesOf,
+  summaryFrom,
 } from './percentiles.js';
 import type { StandardConditions } from './standard-conditions.js';
 import { type TornadoBase, type TornadoResult, tornado } from './tornado.js';
@@ -261,22 +263,29 @@ export function evaluateReservesCase(input: ReservesCaseInput): ReservesCaseResu
     (k0 * v.area * v.netPay * v.porosity * (1 - v.sw)) / v.bo;
   const scalarRec = (v: Readonly<Record<ReservesInputName, number>>): number => scalarIn(v) * v.recoveryFactor;
   const tornadoBase = input.tornadoBase ?? 'p50';
+  const points = input.monteCarlo.exceedancePoints ?? 101;
+  if (!Number.isInteger(points) || points < 2) {
+    throw new RangeError(`${FN}: monteCarlo.exceedancePoints must be an integer >= 2 (got ${points})`);
+  }
   const summarize = (out: Float64Array, model: typeof scalarIn): OutputDistribution => {
-    const { sorted, missing } = sortFinite(out);
-    const field = percentilesFromSorted(sorted, missing);
+    const { finite, missing } = finiteCopy(out);
+    const probs = exceedanceProbabilities(points);
+    const q = quantilesOf(finite, [0.1, 0.5, 0.9, ...probs]);
+    const field = summaryFrom(finite, missing, q[0], q[1], q[2]);
     return {
       field,
       metric: scaleSummary(field, toMetric),
       fieldUnit,
-      histogram: histogram(sorted, { bins: input.monteCarlo?.bins ?? 40 }),
-      exceedance: exceedanceFromSorted(sorted, input.monteCarlo?.exceedancePoints ?? 101),
+      histogram: histogram(finite, { bins: input.monteCarlo?.bins ?? 40 }),
+      exceedance: exceedanceFromQuantiles(q.slice(3)),
       tornado: tornado({ inputs: dists, model, base: tornadoBase, baseValues: base }),
     };
   };
   const inputSummaries = {} as Record<ReservesInputName, InputSummary>;
   for (const k of NAMES) {
     let sum = 0;
-    for (const v of s[k]) sum += v;
+    const x = s[k];
+    for (let i = 0; i < trials; i++) sum += x[i];
     inputSummaries[k] = {
       p90: distributionQuantile(dists[k], 0.1),
       p50: distributionQuantile(dists[k], 0.5),

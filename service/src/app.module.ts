@@ -12,9 +12,12 @@ import { JWT_SECRET, resolveJwtSecret } from './config/jwt-secret.js';
 import { DatabaseModule } from './database/database.module.js';
 import { HealthModule } from './health/health.module.js';
 import { LogRunsModule } from './log-runs/log-runs.module.js';
+import { ProductionModule } from './production/production.module.js';
+import { ReservesCasesModule } from './reserves-cases/reserves-cases.module.js';
 import { SeedModule } from './seed/seed.module.js';
 import { SetupModule } from './setup/setup.module.js';
 import { WellsModule } from './wells/wells.module.js';
+import { WORKBENCH_MODULES } from './workbench/workbench-modules.js';
 
 @Module({})
 export class AppModule {
@@ -31,9 +34,12 @@ export class AppModule {
         AssetsModule,
         WellsModule,
         LogRunsModule,
+        ProductionModule,
+        ReservesCasesModule,
         HealthModule,
         SetupModule,
         SeedModule,
+        ...WORKBENCH_MODULES,
         ...staticUi,
       ],
       providers: [

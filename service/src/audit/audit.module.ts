@@ -1,6 +1,9 @@
 import { Global, Module } from '@nestjs/common';
+import { AuditLogService } from './audit-log.service.js';
+import { AuditController } from './audit.controller.js';
+import { AuditRepository } from './audit.repository.js';
 import { AuditService } from './audit.service.js';
 
 @Global()
-@Module({ providers: [AuditService], exports: [AuditService] })
+@Module({ controllers: [AuditController], providers: [AuditService, AuditLogService, AuditRepository], exports: [AuditService] })
 export class AuditModule {}

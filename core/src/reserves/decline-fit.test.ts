@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { arpsRates } from './decline.js';
+import { arpsEur, arpsRates } from './decline.js';
 import { fitArpsDecline } from './decline-fit.js';
 import { fillUniform } from './random.js';
 
@@ -47,6 +47,15 @@ describe('fitArpsDecline (least squares on rate)', () => {
     expect(fit.rSquared).toBeGreaterThan(0.98);
     expect(fit.rmse).toBeGreaterThan(0);
     expect(fit.diEffectivePerYear).toBeLessThan(fit.params.diNominalPerYear);
+    expect(fit.eur).toBeNull();
+  });
+
+  it('fitArpsDecline with an economic limit returns the EUR of the fitted curve', () => {
+    const q = arpsRates({ qi: 1200, diNominalPerYear: 0.35, b: 0 }, T);
+    const fit = fitArpsDecline(T, q, { kind: 'exponential', economicLimitRate: 20 });
+    expect(fit.eur!.remaining).toBeCloseTo(arpsEur(fit.params, 20).remaining, 6);
+    // Independent: exponential EUR = (qi - qlim)/D with the true parameters, to the fit's precision
+    expect(fit.eur!.remaining / (1180 / (0.35 / 365.25))).toBeCloseTo(1, 4);
   });
 
   it('fitArpsDecline skips NaN pairs and rejects bad input naming the field', () => {

@@ -1,4 +1,4 @@
-import { type ArpsKind, type ArpsParams, nominalToEffective } from './decline.js';
+import { type ArpsEur, type ArpsKind, type ArpsParams, arpsEur, nominalToEffective } from './decline.js';
 import { DAYS_PER_YEAR } from './units-constants.js';
 
 /** Options of {@link fitArpsDecline}. */
@@ -6,6 +6,8 @@ export interface ArpsFitOptions {
   kind: ArpsKind;
   /** Upper bound of b for 'hyperbolic' (default 1, Arps' range; at most 2). */
   bMax?: number;
+  /** Economic-limit rate per day; when given, the fit also returns the EUR to it (from t = 0). */
+  economicLimitRate?: number;
 }
 
 /** Result of {@link fitArpsDecline}. */
@@ -26,6 +28,8 @@ export interface ArpsFit {
   skipped: number;
   /** True when Di or b ended at a search bound (check the data). */
   atBound: boolean;
+  /** EUR to options.economicLimitRate (see arpsEur), or null when no limit was given. */
+  eur: ArpsEur | null;
 }
 
 const D_MIN = 1e-7; // per day
@@ -60,14 +64,16 @@ function golden(f: (x: number) => number, a: number, b: number, iters = 80): num
  * RATE residuals sum (q_i - q(t_i))^2 (not log-rate). For given D and b the best qi is linear:
  * qi = sum(q g)/sum(g^2) with g = q(t)/qi; D is found by a log-spaced scan then golden-section
  * refinement over [1e-7, 1] per day, and for 'hyperbolic' b by a scan of [0, bMax] then
- * golden-section refinement. Exponential fixes b = 0, harmonic b = 1.
+ * golden-section refinement. Exponential fixes b = 0, harmonic b = 1. With
+ * `economicLimitRate` the EUR to that rate is returned as well (see arpsEur).
  * Source of the model: Arps, J.J. (1945) Trans. AIME 160. Fitting method: ordinary least
  * squares, e.g. Press et al. (2007) Numerical Recipes, 3rd ed., ch. 15. // common practice
  *
  * @param tDays times since the start of the decline, days (>= 0); qi is the fitted rate at t = 0
  * @param rates rates per day (>= 0); pairs with NaN are skipped and counted
  * @throws RangeError('fitArpsDecline: ...') for unequal lengths, too few points (2, or 3 for
- *   hyperbolic), negative t or q, an unknown kind, or all-zero rates
+ *   hyperbolic), negative t or q, an unknown kind, or all-zero rates; RangeError('arpsEur: ...')
+ *   for a bad economic limit
  * @example fitArpsDecline([0, 30, 60, 90], [1000, 960, 921, 884], { kind: 'exponential' })
  */
 export function fitArpsDecline(
@@ -170,11 +176,13 @@ export function fitArpsDecline(
   let sst = 0;
   for (const q of qs) sst += (q - mean) * (q - mean);
   const diNominalPerYear = d * DAYS_PER_YEAR;
+  const params = { qi, diNominalPerYear, b };
+  const eur = options.economicLimitRate === undefined ? null : arpsEur(params, options.economicLimitRate);
   const atBound =
     Math.abs(lnD - lnMin) < 1e-6 || Math.abs(lnD - lnMax) < 1e-6 || (kind === 'hyperbolic' && (b === 0 || Math.abs(b - bMax) < 1e-6));
   return {
     kind,
-    params: { qi, diNominalPerYear, b },
+    params,
     diEffectivePerYear: nominalToEffective(diNominalPerYear, b),
     diNominalPerDay: d,
     rSquared: sst > 0 ? 1 - sse / sst : 1,
@@ -182,5 +190,6 @@ export function fitArpsDecline(
     n,
     skipped,
     atBound,
+    eur,
   };
 }

@@ -84,7 +84,7 @@ export interface GasPvtResult {
  * 1975 or Hall & Yarborough 1973), then Bg by {@link gasFvf}.
  *
  * @throws RangeError from each step, naming the function and field (e.g. a Tpr outside [1, 3])
- * @example gasPvt({ pressurePsia: 3000, temperatureF: 180, gasGravity: 0.7 }).z // about 0.86
+ * @example gasPvt({ pressurePsia: 3000, temperatureF: 180, gasGravity: 0.7 }).z // 0.8705
  */
 export function gasPvt(input: GasPvtInput): GasPvtResult {
   requirePositive('gasPvt', 'pressurePsia', input.pressurePsia);

@@ -31,7 +31,7 @@ const A11 = 0.721;
  * @param ppr pseudo-reduced pressure p/Ppc, dimensionless, in [0, 30] (z = 1 at Ppr = 0)
  * @returns z, dimensionless
  * @throws RangeError('zFactorDak: tpr must be in [1, 3] ...') and likewise for ppr
- * @example zFactorDak(1.5, 2.0) // about 0.825 (Standing-Katz chart 0.822)
+ * @example zFactorDak(1.5, 2.0) // 0.8215 (Standing-Katz chart 0.822)
  */
 export function zFactorDak(tpr: number, ppr: number): number {
   requireInRange('zFactorDak', 'tpr', tpr, 1.0, 3.0);

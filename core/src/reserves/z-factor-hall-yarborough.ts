@@ -19,7 +19,7 @@ import { requireInRange } from './validate.js';
  * @param ppr pseudo-reduced pressure, dimensionless, in [0, 24] (z = 1 at Ppr = 0)
  * @returns z, dimensionless
  * @throws RangeError('zFactorHallYarborough: tpr must be in [1, 3] ...') and likewise for ppr
- * @example zFactorHallYarborough(1.5, 2.0) // about 0.823 (Standing-Katz chart 0.822)
+ * @example zFactorHallYarborough(1.5, 2.0) // 0.8208 (Standing-Katz chart 0.822)
  */
 export function zFactorHallYarborough(tpr: number, ppr: number): number {
   requireInRange('zFactorHallYarborough', 'tpr', tpr, 1.0, 3.0);

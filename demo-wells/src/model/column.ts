@@ -154,7 +154,8 @@ export function sampleDepth(s: Sampling, i: number): { depth: number; md: number
 }
 
 function temperatureAndRw(w: WellSpec, tvdss: number): { temperatureF: number; rw: number } {
-  const t = formationTemperatureF(SURFACE_TEMPERATURE_F, GEOTHERMAL_GRADIENT_F_PER_100FT, tvdss + w.groundElevationFt);
+  // Rounded to 0.1 F: the model states its temperatures as a user would read them.
+  const t = Math.round(10 * formationTemperatureF(SURFACE_TEMPERATURE_F, GEOTHERMAL_GRADIENT_F_PER_100FT, tvdss + w.groundElevationFt)) / 10;
   return { temperatureF: t, rw: arpsForward(RW_REFERENCE.rw, RW_REFERENCE.temperatureF, t) };
 }
 

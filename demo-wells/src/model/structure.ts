@@ -23,8 +23,8 @@ export function wrenTopTvdss(x: number, y: number): number {
 export function areaAboveLevelAcres(
   top: (x: number, y: number) => number,
   level: number,
-  cellFt = 50,
-  halfWidthFt = 25000,
+  cellFt = 100,
+  halfWidthFt = 20000,
 ): number {
   let cells = 0;
   const n = Math.round((2 * halfWidthFt) / cellFt);

@@ -34,8 +34,120 @@ export { recogniseCurve } from './curves/recognise-curve.js';
 export type { CurveRecognition } from './curves/recognise-curve.js';
 
 // --- Petrophysics: shale volume, porosity, water resistivity, saturation ---
+export {
+  VSH_METHODS,
+  gammaRayIndex,
+  larionovTertiary,
+  larionovOlder,
+  steiber,
+  clavier,
+  vshFromIndex,
+  shaleVolume,
+  gammaRayPercentiles,
+} from './petro/shale-volume.js';
+export type { VshMethod, ShaleVolumeParams } from './petro/shale-volume.js';
+export {
+  MATRIX_CONSTANTS,
+  FLUID_CONSTANTS,
+  densityPorosity,
+  bulkDensityFromPorosity,
+  neutronDensityPorosity,
+  neutronDensityGasPorosity,
+  shalePorosityFromDensity,
+  effectivePorosity,
+  densityPorosityCurve,
+  neutronDensityPorosityCurve,
+  effectivePorosityCurve,
+} from './petro/porosity.js';
+export type { Lithology, DensityPorosityParams } from './petro/porosity.js';
+export { sonicPorosityWyllie, transitTimeWyllie, sonicPorosityRhg, transitTimeRhg, sonicPorosity } from './petro/sonic-porosity.js';
+export type { SonicPorosityParams } from './petro/sonic-porosity.js';
+export {
+  celsiusToFahrenheit,
+  fahrenheitToCelsius,
+  celsiusToKelvin,
+  toFahrenheit,
+  temperatureLine,
+  formationTemperature,
+} from './petro/temperature.js';
+export type { TemperatureUnit, TemperatureModel } from './petro/temperature.js';
+export { arpsOffset, resistivityAtTemperature, arpsRw, spCoefficient, rwFromSsp } from './petro/water-resistivity.js';
+export type { SspParams } from './petro/water-resistivity.js';
+export { pickettFit } from './petro/pickett.js';
+export type { PickettFit } from './petro/pickett.js';
+export {
+  SW_MODELS,
+  formationFactor,
+  archieSaturation,
+  archieResistivity,
+  simandouxSaturation,
+  simandouxResistivity,
+  indonesiaSaturation,
+  indonesiaResistivity,
+  waterSaturation,
+} from './petro/saturation.js';
+export type { SwModel, SaturationParams } from './petro/saturation.js';
+export { bulkVolumeWater, bulkVolumeWaterCurve } from './petro/bulk-volume-water.js';
+export {
+  PERMEABILITY_METHODS,
+  timurPermeability,
+  coatesPermeability,
+  permeabilityFrom,
+  permeabilityCurve,
+} from './petro/permeability.js';
+export type { PermeabilityMethod } from './petro/permeability.js';
+export { clampCurve } from './petro/clamp.js';
+export type { ClampResult } from './petro/clamp.js';
 
 // --- Cutoffs, zone summaries, sensitivity, deviation survey, pipeline ---
+export { evaluateWell } from './evaluation/pipeline.js';
+export type {
+  EvaluateWellInput,
+  EvaluateWellResult,
+  EvaluatedCurves,
+  EvaluationZone,
+  EvaluationWarning,
+  ResolvedZoneParameters,
+  WellCurves,
+} from './evaluation/pipeline.js';
+export { POROSITY_METHODS, defaultZoneParameters, validateZoneParameters } from './evaluation/zone-parameters.js';
+export type {
+  ZoneParameters,
+  PorosityMethod,
+  RwSource,
+  PermeabilityParameters,
+  DefaultLithology,
+} from './evaluation/zone-parameters.js';
+export { applyCutoffs, reservoirFlag, payFlag, cutoffIssues } from './evaluation/cutoffs.js';
+export type { CutoffSet, CutoffTable, CutoffCurves, ZoneInterval } from './evaluation/cutoffs.js';
+export { summariseZones } from './evaluation/zone-summary.js';
+export type { ZoneSummary, IntervalSummary, Thickness, SummariseInput } from './evaluation/zone-summary.js';
+export { cutoffSensitivity } from './evaluation/sensitivity.js';
+export type { CutoffName, CutoffSensitivity } from './evaluation/sensitivity.js';
+export {
+  sampleBoundaries,
+  sampleThickness,
+  zoneSampleRanges,
+  zoneBoundsIssues,
+  depthIssues,
+} from './evaluation/sample-thickness.js';
+export type { ZoneBounds, ZoneRange } from './evaluation/sample-thickness.js';
+export { sampleGeometry, surveyPath } from './evaluation/sample-geometry.js';
+export type { SampleGeometry, SurveyInput } from './evaluation/sample-geometry.js';
+export { QC_VSH_CLIPPED, QC_PHIT_CLAMPED, QC_PHIE_CLAMPED, QC_SW_CLAMPED, QC_SW_NO_ROOT } from './evaluation/qc.js';
+export { EVALUATION_CONVENTIONS } from './evaluation/conventions.js';
+export type { EvaluationConvention } from './evaluation/conventions.js';
+export { EvaluationInputError, formatIssue } from './evaluation/errors.js';
+export type { ParameterIssue } from './evaluation/errors.js';
+export {
+  minimumCurvature,
+  surveyPathFromTable,
+  positionsAtMd,
+  positionAtMd,
+  ratioFactor,
+  trueVerticalThickness,
+} from './survey/minimum-curvature.js';
+export type { SurveyStation, SurveyTable, SurveyPath, PathPositions } from './survey/minimum-curvature.js';
 
 // --- Binary transfer of curve samples ---
 export { encodeCurveBundle, decodeCurveBundle } from './transfer/curve-bundle.js';

@@ -11,20 +11,24 @@
  * NaN. Clamps are recorded in the QC mask (see qc.ts) and counted in the summaries.
  * Conventions: EVALUATION_CONVENTIONS.
  */
-import { densityPorosity, neutronDensityGasPorosity, neutronDensityPorosity } from '../petro/porosity.js';
 import { type PickettFit, pickettFit } from '../petro/pickett.js';
-import { permeabilityFrom } from '../petro/permeability.js';
-import { archieSaturation, indonesiaSaturation, simandouxSaturation } from '../petro/saturation.js';
-import { gammaRayPercentiles, vshFromIndex } from '../petro/shale-volume.js';
-import { sonicPorosityRhg, sonicPorosityWyllie } from '../petro/sonic-porosity.js';
+import { gammaRayPercentiles } from '../petro/shale-volume.js';
 import { temperatureLine } from '../petro/temperature.js';
 import { arpsOffset, rwFromSsp } from '../petro/water-resistivity.js';
 import { positionsAtMd } from '../survey/minimum-curvature.js';
 import { type ParameterIssue, throwIfIssues } from './errors.js';
-import { type CutoffTable, type ZoneInterval, cutoffIssues, formationOf, payFlag, reservoirFlag } from './cutoffs.js';
-import { QC_PHIE_CLAMPED, QC_PHIT_CLAMPED, QC_SW_CLAMPED, QC_SW_NO_ROOT, QC_VSH_CLIPPED } from './qc.js';
+import { type CutoffTable, type ZoneInterval, cutoffIssues, formationOf } from './cutoffs.js';
 import { type SampleGeometry, type SurveyInput, geometryPositionAt, sampleGeometry } from './sample-geometry.js';
 import { type ZoneRange, depthIssues, lowerBound, zoneBoundsIssues, zoneRangesUnchecked } from './sample-thickness.js';
+import {
+  type FlagInputs,
+  type PorosityInputs,
+  type SaturationInputs,
+  flagStage,
+  porosityStage,
+  saturationStage,
+  vshStage,
+} from './zone-kernels.js';
 import { type ZoneParameters, validateZoneParameters } from './zone-parameters.js';
 import { type ZoneSummary, summariseUnchecked } from './zone-summary.js';
 
@@ -158,20 +162,21 @@ const POR_CODE = { density: 0, neutron_density: 1, neutron_density_gas: 2, sonic
 const SW_CODE = { archie: 0, simandoux: 1, indonesia: 2 } as const;
 const NO_CURVE = new Float64Array(0);
 
-/** Porosity (PHIT, unclamped) of sample i by the zone's method (kernel dispatch). */
-function totalPorosityAt(code: number, p: ZoneParameters, c: Required<Record<'rhob' | 'nphi' | 'dt', Curve>>, i: number): number {
-  switch (code) {
-    case 0:
-      return densityPorosity(c.rhob[i], p.rhoMatrix, p.rhoFluid);
-    case 1:
-      return neutronDensityPorosity(c.nphi[i], densityPorosity(c.rhob[i], p.rhoMatrix, p.rhoFluid));
-    case 2:
-      return neutronDensityGasPorosity(c.nphi[i], densityPorosity(c.rhob[i], p.rhoMatrix, p.rhoFluid));
-    case 3:
-      return sonicPorosityWyllie(c.dt[i], p.dtMatrix, p.dtFluid, p.sonicCompaction);
-    default:
-      return sonicPorosityRhg(c.dt[i], p.dtMatrix, p.dtFluid);
-  }
+const CHUNK = 4096;
+
+function toF64(c: Curve | undefined): Float64Array {
+  return c === undefined ? NO_CURVE : c instanceof Float64Array ? c : Float64Array.from(c);
+}
+
+/** The curves as Float64Array (copied only when given as plain arrays), so the loops stay monomorphic. */
+interface F64Curves {
+  depth: Float64Array;
+  gr: Float64Array;
+  rhob: Float64Array;
+  nphi: Float64Array;
+  dt: Float64Array;
+  rt: Float64Array;
+  sp: Float64Array;
 }
 
 /**
@@ -194,7 +199,11 @@ export function evaluateWell(input: EvaluateWellInput): EvaluateWellResult {
   const warnings: EvaluationWarning[] = [];
   const geometry = input.survey ? sampleGeometry(depth, input.survey) : null;
   // TVD at each sample (for temperature): from the survey, else measured depth.
-  const tvdCentre: Curve = geometry ? positionsAtMd(geometry.path, depth).tvd : depth;
+  const c64: F64Curves = {
+    depth: toF64(depth), gr: toF64(curves.gr), rhob: toF64(curves.rhob), nphi: toF64(curves.nphi),
+    dt: toF64(curves.dt), rt: toF64(curves.rt), sp: toF64(curves.sp),
+  };
+  const tvdCentre = geometry ? positionsAtMd(geometry.path, c64.depth).tvd : c64.depth;
   const tvdAt = (md: number): number => (geometry ? geometryPositionAt(geometry, md).tvd : md);
   const ranges = zoneRangesUnchecked(depth, zones);
   const anyPerm = zones.some((z) => z.params.permeability !== null);
@@ -208,7 +217,7 @@ export function evaluateWell(input: EvaluateWellInput): EvaluateWellResult {
 
   zones.forEach((z, k) => {
     const r = ranges[k];
-    resolved.push(evaluateZone(z, r, input, tvdCentre, tvdAt, out, qc, cutoffs, warnings));
+    resolved.push(evaluateZone(z, r, c64, tvdCentre, tvdAt, out, qc, cutoffs, warnings));
   });
   fillOutside(out, ranges, n);
 
@@ -228,8 +237,8 @@ export function evaluateWell(input: EvaluateWellInput): EvaluateWellResult {
 function evaluateZone(
   z: EvaluationZone,
   r: ZoneRange,
-  input: EvaluateWellInput,
-  tvdC: Curve,
+  curves: F64Curves,
+  tvdC: Float64Array,
   tvdAt: (md: number) => number,
   out: EvaluatedCurves,
   qc: Uint8Array,
@@ -237,10 +246,8 @@ function evaluateZone(
   warnings: EvaluationWarning[],
 ): ResolvedZoneParameters {
   const p = z.params;
-  const { curves, depth } = input;
+  const { depth, gr, rt } = curves;
   const s = r.computeStart, e = r.computeEnd;
-  const gr = curves.gr!, rt = curves.rt!;
-  const por = { rhob: curves.rhob ?? NO_CURVE, nphi: curves.nphi ?? NO_CURVE, dt: curves.dt ?? NO_CURVE };
   const where = (field: string, msg: string) => new RangeError(`evaluateWell: zone '${z.name}': ${field} ${msg}`);
 
   // GR picks.
@@ -260,7 +267,11 @@ function evaluateZone(
   const { t0, slope } = temperatureLine(p.temperature);
   const unit = p.temperatureUnit;
   const kArps = arpsOffset(unit);
-  const porCode = POR_CODE[p.porosityMethod];
+  const porIn: PorosityInputs = {
+    code: POR_CODE[p.porosityMethod], rhob: curves.rhob, nphi: curves.nphi, dt: curves.dt,
+    rhoMatrix: p.rhoMatrix, rhoFluid: p.rhoFluid, dtMatrix: p.dtMatrix, dtFluid: p.dtFluid, cp: p.sonicCompaction,
+    phiMax: p.phiMax, phiShale: p.phiShale,
+  };
   let m = p.m;
   let rwRef: number, tRef: number, pickett: PickettFit | null = null, ssp: number | null = null;
   if (p.rw.kind === 'at_temperature') {
@@ -271,7 +282,7 @@ function evaluateZone(
     ssp = p.rw.ssp;
     if (ssp === null) {
       try {
-        const q = gammaRayPercentiles(curves.sp!, s, e, 5, 95);
+        const q = gammaRayPercentiles(curves.sp, s, e, 5, 95);
         ssp = q.grClean - q.grShale;
       } catch (err) {
         throw where('rw.ssp', `cannot be picked from the SP curve: ${(err as Error).message}`);
@@ -280,14 +291,11 @@ function evaluateZone(
     rwRef = rwFromSsp({ ssp, rmf: p.rw.rmf, rmfTemperature: p.rw.rmfTemperature, formationTemperature: tRef, temperatureUnit: unit });
     if (rwRef < 0.1) warnings.push({ zone: z.name, field: 'rw.ssp', message: `Rw from SP is ${rwRef.toPrecision(3)} ohm.m: below about 0.1 ohm.m Rwe differs from Rw (no chart correction applied)` });
   } else {
+    // Shale volume and porosity of the water interval first (the main pass rewrites the same values).
     const a0 = lowerBound(depth, p.rw.top), a1 = lowerBound(depth, p.rw.base);
-    const phi = new Float64Array(a1 - a0), rtw = new Float64Array(a1 - a0);
-    for (let i = a0; i < a1; i++) {
-      const vsh = gr[i] === gr[i] ? vshFromIndex(p.vshMethod, clip01((gr[i] - grClean) / (grShale - grClean))) : NaN;
-      const phit = Math.min(Math.max(totalPorosityAt(porCode, p, por, i), 0), p.phiMax);
-      phi[i - a0] = p.phiShale === 0 ? phit : Math.min(Math.max(phit - vsh * p.phiShale, 0), phit);
-      rtw[i - a0] = rt[i];
-    }
+    vshStage(VSH_CODE[p.vshMethod], gr, a0, a1, grClean, 1 / (grShale - grClean), out.VSH, qc);
+    porosityStage(porIn, a0, a1, out.VSH, out.PHIT, out.PHIE, qc);
+    const phi = out.PHIE.subarray(a0, a1), rtw = rt.subarray(a0, a1);
     try {
       pickett = pickettFit(phi, rtw);
     } catch (err) {
@@ -304,66 +312,26 @@ function evaluateZone(
   const tk = t0 + kArps;
 
   const c = cutoffs[formationOf(z)];
-  const permMin = c.permMin ?? -Infinity;
-  const vshCode = VSH_CODE[p.vshMethod], swCode = SW_CODE[p.swModel];
+  const satIn: SaturationInputs = {
+    code: SW_CODE[p.swModel], rt, tvd: tvdC, rwNum: rwRef * (tRef + kArps), tk: t0 + kArps, slope, a: p.a, m, n: p.n, rsh: p.rsh ?? NaN,
+  };
+  const perm = p.permeability;
+  const flagIn: FlagInputs = {
+    vshMax: c.vshMax, phiMin: c.phiMin, swMax: c.swMax, permMin: c.permMin ?? -Infinity,
+    permCode: perm === null ? 0 : perm.method === 'timur' ? 1 : 2, swIrr: perm?.swIrr ?? NaN,
+  };
   const { VSH, PHIT, PHIE, SW, BVW, PERM, NET_RES, NET_PAY } = out;
-  const invGr = 1 / (grShale - grClean);
-  const { phiShale, phiMax, a, n } = p;
-  const rsh = p.rsh ?? NaN;
-  const permMethod = p.permeability?.method ?? 'timur';
-  const swIrr = p.permeability?.swIrr ?? null;
-  const doPerm = PERM !== null && p.permeability !== null;
+  const vshCode = VSH_CODE[p.vshMethod], invGr = 1 / (grShale - grClean);
   let noRoot = 0;
-
-  for (let i = s; i < e; i++) {
-    let q = 0;
-    // Shale volume.
-    const g = gr[i];
-    let igr = (g - grClean) * invGr;
-    if (igr < 0) { igr = 0; q |= QC_VSH_CLIPPED; } else if (igr > 1) { igr = 1; q |= QC_VSH_CLIPPED; }
-    let vsh: number;
-    if (g !== g) vsh = NaN;
-    else if (vshCode === 0) vsh = igr;
-    else vsh = vshFromIndex(p.vshMethod, igr);
-    // Porosity.
-    let phit = porCode === 0 ? densityPorosity(por.rhob[i], p.rhoMatrix, p.rhoFluid) : totalPorosityAt(porCode, p, por, i);
-    if (phit < 0) { phit = 0; q |= QC_PHIT_CLAMPED; } else if (phit > phiMax) { phit = phiMax; q |= QC_PHIT_CLAMPED; }
-    let phie = phit;
-    if (phiShale !== 0) {
-      phie = phit - vsh * phiShale;
-      if (phie < 0) { phie = 0; q |= QC_PHIE_CLAMPED; } else if (phie > phit) { phie = phit; q |= QC_PHIE_CLAMPED; }
-    }
-    // Water saturation.
-    const rw = rwNum / (tk + slope * tvdC[i]);
-    let sw: number;
-    if (swCode === 0) sw = archieSaturation(phie, rt[i], rw, a, m, n);
-    else if (swCode === 1) sw = simandouxSaturation(phie, rt[i], vsh, rw, rsh, a, m, n);
-    else sw = indonesiaSaturation(phie, rt[i], vsh, rw, rsh, a, m, n);
-    if (sw < 0) { sw = 0; q |= QC_SW_CLAMPED; } else if (sw > 1) { sw = 1; q |= QC_SW_CLAMPED; } else if (sw !== sw && swCode === 1 && n !== 2 && phie === phie && rt[i] === rt[i] && vsh === vsh) {
-      q |= QC_SW_NO_ROOT;
-      noRoot++;
-    }
-    VSH[i] = vsh;
-    PHIT[i] = phit;
-    PHIE[i] = phie;
-    SW[i] = sw;
-    BVW[i] = phie * sw;
-    let perm = NaN;
-    if (doPerm) {
-      perm = permeabilityFrom(permMethod, phie, swIrr ?? sw);
-      PERM![i] = perm;
-    } else if (PERM !== null) PERM[i] = NaN;
-    const res = reservoirFlag(vsh, phie, perm, c.vshMax, c.phiMin, permMin);
-    NET_RES[i] = res;
-    NET_PAY[i] = payFlag(res, sw, c.swMax);
-    qc[i] = q;
+  for (let c0 = s; c0 < e; c0 += CHUNK) {
+    const c1 = Math.min(e, c0 + CHUNK);
+    vshStage(vshCode, gr, c0, c1, grClean, invGr, VSH, qc);
+    porosityStage(porIn, c0, c1, VSH, PHIT, PHIE, qc);
+    noRoot += saturationStage(satIn, c0, c1, VSH, PHIE, SW, qc);
+    flagStage(flagIn, c0, c1, VSH, PHIE, SW, BVW, PERM, NET_RES, NET_PAY);
   }
   if (noRoot > 0) warnings.push({ zone: z.name, field: 'n', message: `Simandoux did not converge on ${noRoot} samples (SW left empty)` });
   return { zone: z.name, grClean, grShale, rwReference: rwRef, rwReferenceTemperature: tRef, m, pickett, ssp };
-}
-
-function clip01(x: number): number {
-  return x < 0 ? 0 : x > 1 ? 1 : x;
 }
 
 /** NaN in every output outside the zones' compute ranges. */

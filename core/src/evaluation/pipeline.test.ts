@@ -180,6 +180,49 @@ describe('evaluateWell: round trip through the forward forms', () => {
   });
 });
 
+describe('evaluateWell: Rw from SP, GR picks, permeability cutoff', () => {
+  it('Rw from a given SSP matches the SSP equation worked by hand (-80 mV, Rmf 0.5 at 75 F, 150 F)', () => {
+    // Asquith & Krygowski (2004) ch. 2 form // from memory; hand-computed Rw = 0.221677 / 9.73341 = 0.022775.
+    const p = sandParams({ temperature: { kind: 'constant', temperature: 150 }, rw: { kind: 'ssp', ssp: -80, rmf: 0.5, rmfTemperature: 75 } });
+    const r = evaluateWell(input(sandParams()));
+    const inp = input(sandParams());
+    const rs = evaluateWell({ ...inp, zones: [{ name: 'Res', top: 5000, base: 5200, params: p }] });
+    expect(rs.resolved[0].rwReference).toBeCloseTo(0.022775, 5);
+    expect(rs.resolved[0].rwReferenceTemperature).toBe(150);
+    expect(rs.warnings.some((w) => w.field === 'rw.ssp')).toBe(true); // below 0.1 ohm.m
+    expect(r.resolved[0].ssp).toBeNull();
+  });
+
+  it('picks SSP from the SP curve as P5 - P95 over the zone when ssp is null', () => {
+    const p = sandParams({ temperature: { kind: 'constant', temperature: 150 }, rw: { kind: 'ssp', ssp: null, rmf: 0.5, rmfTemperature: 75 } });
+    const inp = input(sandParams());
+    const sp = Array.from(inp.depth as Float64Array, (d) => (d < 5050 ? 0 : -80)); // shale baseline 0 mV, sands -80 mV
+    const r = evaluateWell({ ...inp, curves: { ...inp.curves, sp }, zones: [{ name: 'Res', top: 5000, base: 5200, params: p }] });
+    expect(r.resolved[0].ssp).toBeCloseTo(-80, 10);
+    expect(r.resolved[0].rwReference).toBeCloseTo(0.022775, 5);
+    expect(() => evaluateWell({ ...inp, zones: [{ name: 'Res', top: 5000, base: 5200, params: p }] })).toThrow("zone 'Res': curves.sp is required");
+  });
+
+  it('picks GR clean and shale as P5 and P95 of the zone when they are null', () => {
+    const p = { ...sandParams(), grClean: null, grShale: null };
+    const r = evaluateWell(input(p));
+    // The model GR is 20 (clean and tight sands: 50% of samples), 30 (25%) and 120 (shale: 25%, less the last sample).
+    expect(r.resolved[0].grClean).toBe(20);
+    expect(r.resolved[0].grShale).toBe(120);
+  });
+
+  it('a permeability cutoff (Timur, Swirr 0.2) removes the water sand from net reservoir', () => {
+    // Timur (1968) // from memory: phi 0.25 -> 480 mD, phi 0.20 -> 180 mD (hand-computed 8581 phi^4.4 / 0.04).
+    const p = sandParams({ permeability: { method: 'timur', swIrr: 0.2 } });
+    const inp = input(p, { cutoffs: { Res: { vshMax: 0.5, phiMin: 0.08, swMax: 0.6, permMin: 200 } } });
+    const r = evaluateWell(inp);
+    expect(r.curves.PERM![150]).toBeCloseTo((0.136 * 25 ** 4.4) / 400, 6);
+    expect(r.zones[0].netReservoir.thickness.md).toBeCloseTo(50, 9);
+    const missing = { ...inp, zones: [{ name: 'Res', top: 5000, base: 5200, params: sandParams() }] };
+    expect(() => evaluateWell(missing)).toThrow("zone 'Res': permeability must be set: formation 'Res' has a permMin cutoff");
+  });
+});
+
 describe('evaluateWell: parameter errors name the zone and the field', () => {
   const p = sandParams();
   const run = (params: ZoneParameters, zone: Partial<EvaluationZone> = {}) => () =>

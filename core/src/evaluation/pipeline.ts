@@ -3,8 +3,8 @@
  * in the browser. Curves + zones (each with its parameters) + cutoffs per formation (+ an
  * optional deviation survey) -> computed curves, a QC mask, zone summaries and warnings.
  *
- * Per zone, one plain loop over the zone's samples computes, with the shared per-sample
- * kernels: VSH (GR index clipped to [0, 1], then the method), PHIT (clamped to [0, phiMax]),
+ * Per zone, plain loops over the zone's index range (small per-method stage loops, run chunk
+ * by chunk: zone-kernels.ts) compute with the shared per-sample kernels: VSH (GR index clipped to [0, 1], then the method), PHIT (clamped to [0, phiMax]),
  * PHIE (= PHIT - VSH * phiShale, clamped to [0, PHIT]), SW (model, clamped to [0, 1], Rw
  * corrected by Arps to each sample's formation temperature), BVW = PHIE * SW, PERM (when the
  * zone has a transform), NET_RES and NET_PAY (1 / 0 / NaN). Samples outside every zone are
@@ -12,7 +12,7 @@
  * Conventions: EVALUATION_CONVENTIONS.
  */
 import { type PickettFit, pickettFit } from '../petro/pickett.js';
-import { gammaRayPercentiles } from '../petro/shale-volume.js';
+import { gammaRayPercentiles, percentilesOf } from '../petro/shale-volume.js';
 import { temperatureLine } from '../petro/temperature.js';
 import { arpsOffset, rwFromSsp } from '../petro/water-resistivity.js';
 import { positionsAtMd } from '../survey/minimum-curvature.js';
@@ -282,8 +282,8 @@ function evaluateZone(
     ssp = p.rw.ssp;
     if (ssp === null) {
       try {
-        const q = gammaRayPercentiles(curves.sp, s, e, 5, 95);
-        ssp = q.grClean - q.grShale;
+        const [p5, p95] = percentilesOf(curves.sp, s, e, [5, 95], 'SP');
+        ssp = p5 - p95;
       } catch (err) {
         throw where('rw.ssp', `cannot be picked from the SP curve: ${(err as Error).message}`);
       }
@@ -308,9 +308,6 @@ function evaluateZone(
     if (!(m > 0)) throw where('m', `from the Pickett fit must be > 0 (got ${m})`);
   }
   // Rw at sample i: rwRef (tRef + k) / (T_i + k), T_i = t0 + slope * tvd_i.
-  const rwNum = rwRef * (tRef + kArps);
-  const tk = t0 + kArps;
-
   const c = cutoffs[formationOf(z)];
   const satIn: SaturationInputs = {
     code: SW_CODE[p.swModel], rt, tvd: tvdC, rwNum: rwRef * (tRef + kArps), tk: t0 + kArps, slope, a: p.a, m, n: p.n, rsh: p.rsh ?? NaN,

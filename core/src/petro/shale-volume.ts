@@ -130,18 +130,26 @@ export function gammaRayPercentiles(
   if (!(pClean >= 0 && pClean <= 100)) throw new RangeError(`${fn}: grCleanPercentile must be in [0, 100]`);
   if (!(pShale >= 0 && pShale <= 100)) throw new RangeError(`${fn}: grShalePercentile must be in [0, 100]`);
   if (!(pClean < pShale)) throw new RangeError(`${fn}: grCleanPercentile must be < grShalePercentile`);
+  const [grClean, grShale] = percentilesOf(gr, start, end, [pClean, pShale], 'GR');
+  if (!(grShale > grClean)) throw new RangeError(`${fn}: GR percentiles are equal (${grClean} gAPI); no GR contrast in the interval`);
+  return { grClean, grShale };
+}
+
+/**
+ * Percentiles (0-100) of the finite values in [start, end), by linear interpolation between
+ * order statistics (Hyndman & Fan 1996, type 7). `label` names the curve in errors.
+ * Throws RangeError when fewer than 2 finite values are present.
+ * @example percentilesOf([1, 2, 3, 4, 5], 0, 5, [25, 50]) // [2, 3]
+ */
+export function percentilesOf(values: CurveInput, start: number, end: number, ps: readonly number[], label = 'curve'): number[] {
   const vals: number[] = [];
-  for (let i = Math.max(0, start); i < Math.min(end, gr.length); i++) if (Number.isFinite(gr[i])) vals.push(gr[i]);
-  if (vals.length < 2) throw new RangeError(`${fn}: fewer than 2 finite GR samples in the interval`);
+  for (let i = Math.max(0, start); i < Math.min(end, values.length); i++) if (Number.isFinite(values[i])) vals.push(values[i]);
+  if (vals.length < 2) throw new RangeError(`percentilesOf: fewer than 2 finite ${label} samples in the interval`);
   const sorted = Float64Array.from(vals).sort();
-  const q = (p: number): number => {
+  return ps.map((p) => {
     const h = (sorted.length - 1) * (p / 100);
     const lo = Math.floor(h);
     const hi = Math.min(lo + 1, sorted.length - 1);
     return sorted[lo] + (h - lo) * (sorted[hi] - sorted[lo]);
-  };
-  const grClean = q(pClean);
-  const grShale = q(pShale);
-  if (!(grShale > grClean)) throw new RangeError(`${fn}: GR percentiles are equal (${grClean} gAPI); no GR contrast in the interval`);
-  return { grClean, grShale };
+  });
 }

@@ -59,6 +59,29 @@ describe('minimumCurvature', () => {
     expect(positionAtMd(p, 1150).tvd).toBeCloseTo(q.tvd[0], 10);
   });
 
+  it('positionsAtMd inside a turning (3D) segment equals minimum curvature to a station on the same arc', () => {
+    // Independent route: the direction part-way along the arc by spherical interpolation of the
+    // station directions, then minimumCurvature over the shorter segment.
+    const s1 = { md: 2000, inc: 20, azi: 30 }, s2 = { md: 2100, inc: 35, azi: 70 };
+    const p = minimumCurvature([s1, s2]);
+    const dir = (inc: number, azi: number) => {
+      const i = (inc * Math.PI) / 180, a = (azi * Math.PI) / 180;
+      return [Math.sin(i) * Math.cos(a), Math.sin(i) * Math.sin(a), Math.cos(i)];
+    };
+    const t1 = dir(s1.inc, s1.azi), t2 = dir(s2.inc, s2.azi);
+    const beta = Math.acos(t1[0] * t2[0] + t1[1] * t2[1] + t1[2] * t2[2]);
+    const f = 0.37;
+    const t = t1.map((x, k) => (Math.sin((1 - f) * beta) * x + Math.sin(f * beta) * t2[k]) / Math.sin(beta));
+    const mid = { md: 2000 + 100 * f, inc: (Math.acos(t[2]) * 180) / Math.PI, azi: (Math.atan2(t[1], t[0]) * 180) / Math.PI };
+    const q = minimumCurvature([s1, mid]);
+    const got = positionsAtMd(p, [2000, mid.md, 2100]);
+    expect(got.tvd[1]).toBeCloseTo(q.tvd[1], 9);
+    expect(got.north[1]).toBeCloseTo(q.north[1], 9);
+    expect(got.east[1]).toBeCloseTo(q.east[1], 9);
+    expect(got.tvd[2]).toBeCloseTo(p.tvd[1], 9);
+    expect(got.east[0]).toBe(0);
+  });
+
   it('refuses MD that does not increase and an inclination outside [0, 180], naming the station', () => {
     expect(() => minimumCurvature([{ md: 100, inc: 0, azi: 0 }, { md: 100, inc: 1, azi: 0 }])).toThrow(
       'minimumCurvature: station 1 md must be greater',

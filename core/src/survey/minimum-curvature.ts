@@ -146,9 +146,8 @@ export interface PathPositions {
 
 /**
  * TVD, north and east at each measured depth along a path. Within a station pair of a
- * minimum-curvature path the position lies on the same circular arc (exact: a sub-arc from
- * the upper station with dogleg f*beta, f the MD fraction, tangent by spherical
- * interpolation); a table path is interpolated linearly. Above the first station and below
+ * minimum-curvature path the position lies on the same circular arc (exact: at MD fraction f
+ * the point of the arc after a turn of f*beta); a table path is interpolated linearly. Above the first station and below
  * the last the path continues straight along the end direction (table: along the end chord).
  * `md` must be non-decreasing for speed (one forward pass); NaN md gives NaN.
  * Throws RangeError when md decreases.
@@ -159,6 +158,7 @@ export function positionsAtMd(path: SurveyPath, md: Float64Array | readonly numb
   const out = { tvd: new Float64Array(n), north: new Float64Array(n), east: new Float64Array(n) };
   const k = path.md.length;
   const arcs = path.tn.length === k;
+  const arc = new ArcSegment();
   let seg = 0; // index of the upper station of the current segment
   let prev = -Infinity;
   for (let i = 0; i < n; i++) {
@@ -170,7 +170,7 @@ export function positionsAtMd(path: SurveyPath, md: Float64Array | readonly numb
     if (m < prev) throw new RangeError(`${fn}: md must be non-decreasing (sample ${i})`);
     prev = m;
     while (seg < k - 2 && m > path.md[seg + 1]) seg++;
-    positionAt(path, arcs, k, seg, m, out, i);
+    positionAt(path, arcs, k, seg, m, out, i, arc);
   }
   return out;
 }
@@ -185,13 +185,43 @@ export function positionAtMd(path: SurveyPath, md: number): { tvd: number; north
     else hi = mid - 1;
   }
   const out = { tvd: new Float64Array(1), north: new Float64Array(1), east: new Float64Array(1) };
-  positionAt(path, path.tn.length === k, k, lo, md, out, 0);
+  positionAt(path, path.tn.length === k, k, lo, md, out, 0, new ArcSegment());
   return { tvd: out.tvd[0], north: out.north[0], east: out.east[0] };
 }
 
-function positionAt(path: SurveyPath, arcs: boolean, k: number, seg: number, m: number, out: PathPositions, i: number): void {
+/**
+ * One station pair as a circular arc: dogleg beta, radius R = dMD / beta, and the unit
+ * normal u (in the arc's plane, toward the lower station's direction) so that at arc
+ * length s = f dMD the position is P1 + R [sin(f beta) t1 + (1 - cos(f beta)) u].
+ * Cached per segment (positionsAtMd walks the samples in order).
+ */
+class ArcSegment {
+  seg = -1;
+  beta = 0;
+  dmd = 0;
+  un = 0;
+  ue = 0;
+  uv = 0;
+  set(path: SurveyPath, seg: number): void {
+    this.seg = seg;
+    const n1 = path.tn[seg], e1 = path.te[seg], v1 = path.tv[seg];
+    const n2 = path.tn[seg + 1], e2 = path.te[seg + 1], v2 = path.tv[seg + 1];
+    const beta = angleBetween(n1, e1, v1, n2, e2, v2);
+    this.beta = beta;
+    this.dmd = path.md[seg + 1] - path.md[seg];
+    if (beta < 1e-6) {
+      // Near-straight: u * beta ~ t2 - t1; keep that difference (the series form below uses it).
+      this.un = n2 - n1; this.ue = e2 - e1; this.uv = v2 - v1;
+    } else {
+      const c = Math.cos(beta), s = Math.sin(beta);
+      this.un = (n2 - c * n1) / s; this.ue = (e2 - c * e1) / s; this.uv = (v2 - c * v1) / s;
+    }
+  }
+}
+
+function positionAt(path: SurveyPath, arcs: boolean, k: number, seg: number, m: number, out: PathPositions, i: number, arc: ArcSegment): void {
   if (k === 1 || (arcs && (m <= path.md[0] || m >= path.md[k - 1]))) {
-    // Straight continuation along the end direction (arc paths) .
+    // Straight continuation along the end direction (arc paths).
     const j = k === 1 || m <= path.md[0] ? 0 : k - 1;
     const d = m - path.md[j];
     out.tvd[i] = path.tvd[j] + d * (arcs ? path.tv[j] : 1);
@@ -199,30 +229,29 @@ function positionAt(path: SurveyPath, arcs: boolean, k: number, seg: number, m: 
     out.east[i] = path.east[j] + d * (arcs ? path.te[j] : 0);
     return;
   }
-  const m1 = path.md[seg], m2 = path.md[seg + 1];
-  const dmd = m2 - m1;
-  const f = (m - m1) / dmd;
+  const m1 = path.md[seg];
+  const f = (m - m1) / (path.md[seg + 1] - m1);
   if (!arcs) {
     out.tvd[i] = path.tvd[seg] + f * (path.tvd[seg + 1] - path.tvd[seg]);
     out.north[i] = path.north[seg] + f * (path.north[seg + 1] - path.north[seg]);
     out.east[i] = path.east[seg] + f * (path.east[seg + 1] - path.east[seg]);
     return;
   }
+  if (arc.seg !== seg) arc.set(path, seg);
   const n1 = path.tn[seg], e1 = path.te[seg], v1 = path.tv[seg];
-  const n2 = path.tn[seg + 1], e2 = path.te[seg + 1], v2 = path.tv[seg + 1];
-  const beta = angleBetween(n1, e1, v1, n2, e2, v2);
-  let tnf: number, tef: number, tvf: number;
-  if (beta < 1e-9) {
-    tnf = n1 + f * (n2 - n1); tef = e1 + f * (e2 - e1); tvf = v1 + f * (v2 - v1);
+  let a: number, b: number; // position = P1 + a t1 + b u
+  if (arc.beta < 1e-6) {
+    // Series of R sin(f beta) and R (1 - cos(f beta)) with u beta ~ t2 - t1.
+    a = f * arc.dmd;
+    b = 0.5 * f * f * arc.dmd;
   } else {
-    const s = Math.sin(beta);
-    const wa = Math.sin((1 - f) * beta) / s, wb = Math.sin(f * beta) / s;
-    tnf = wa * n1 + wb * n2; tef = wa * e1 + wb * e2; tvf = wa * v1 + wb * v2;
+    const R = arc.dmd / arc.beta, th = f * arc.beta;
+    a = R * Math.sin(th);
+    b = R * (1 - Math.cos(th));
   }
-  const h = ((f * dmd) / 2) * ratioFactor(f * beta);
-  out.tvd[i] = path.tvd[seg] + h * (v1 + tvf);
-  out.north[i] = path.north[seg] + h * (n1 + tnf);
-  out.east[i] = path.east[seg] + h * (e1 + tef);
+  out.tvd[i] = path.tvd[seg] + a * v1 + b * arc.uv;
+  out.north[i] = path.north[seg] + a * n1 + b * arc.un;
+  out.east[i] = path.east[seg] + a * e1 + b * arc.ue;
 }
 
 /**

@@ -90,11 +90,61 @@ function mismatchMessage(line: number, got: number, expected: number): string {
     : `line ${line}: ${got} values where ${expected} curves are defined; the ${got - expected} extra values at the end of the row were ignored`;
 }
 
+/** Resumable state of the fast reader (the loop stops when the columns are full). */
+interface FastState {
+  i: number;
+  line: number;
+  row: number;
+  cap: number;
+  done: boolean;
+  mismatched: number;
+  firstMismatch: DataScanResult['firstMismatch'];
+  aliasNulls: number;
+}
+
 /**
  * Fast reader: unwrapped, space or tab delimited, at most three null aliases.
- * Reads bytes directly; strings are made only for odd tokens.
+ * Reads bytes directly; strings are made only for odd tokens. Columns start small and are
+ * sized from the bytes per row seen so far, so no pass over the file is needed to count lines.
  */
 export function scanDataFast(bytes: Uint8Array, start: number, p: DataScanParams): DataScanResult {
+  if (p.nullAliases.length > 3) throw new RangeError('scanDataFast: at most 3 null aliases');
+  const nc = p.nCurves;
+  const st: FastState = { i: start, line: p.startLine, row: 0, cap: 64, done: false, mismatched: 0, firstMismatch: null, aliasNulls: 0 };
+  const cols = allocate(nc, st.cap);
+  for (;;) {
+    fastLoop(bytes, cols, st, p);
+    if (st.done) break;
+    // Columns full: size them for the rest of the section at the bytes per row seen so far.
+    const perRow = Math.max(1, (st.i - start) / st.row);
+    const more = Math.ceil(((bytes.length - st.i) / perRow) * 1.02) + 16;
+    st.cap = st.row + Math.max(more, st.row >> 1);
+    grow(cols, st.cap);
+  }
+  return {
+    columns: trim(cols, st.row),
+    rows: st.row,
+    end: st.i,
+    endLine: st.line,
+    mismatchedRows: st.mismatched,
+    firstMismatch: st.firstMismatch,
+    aliasNulls: st.aliasNulls,
+  };
+}
+
+const BLOCK = 128;
+
+/** Copies `rows` rows of a row-major block into the columns from row `row0`. */
+function flush(blk: Float64Array, cols: Float64Array[], row0: number, rows: number): void {
+  const nc = cols.length;
+  for (let k = 0; k < nc; k++) {
+    const col = cols[k];
+    for (let r = 0, j = k; r < rows; r++, j += nc) col[row0 + r] = blk[j];
+  }
+}
+
+/** The byte loop of {@link scanDataFast}; returns at the section's end or when the columns are full. */
+function fastLoop(bytes: Uint8Array, cols: Float64Array[], st: FastState, p: DataScanParams): void {
   const n = bytes.length;
   const nc = p.nCurves;
   const log = p.log;
@@ -102,18 +152,19 @@ export function scanDataFast(bytes: Uint8Array, start: number, p: DataScanParams
   const a0 = p.nullAliases.length > 0 ? p.nullAliases[0] : nullV;
   const a1 = p.nullAliases.length > 1 ? p.nullAliases[1] : nullV;
   const a2 = p.nullAliases.length > 2 ? p.nullAliases[2] : nullV;
-  if (p.nullAliases.length > 3) throw new RangeError('scanDataFast: at most 3 null aliases');
-  let cap = estimateLines(bytes, start);
-  const cols = allocate(nc, cap);
-  let row = 0;
-  let i = start;
-  let line = p.startLine;
-  let mismatched = 0;
-  let firstMismatch: DataScanResult['firstMismatch'] = null;
-  let aliasNulls = 0;
+  const cap = st.cap;
+  // Rows go to a small row-major block (L1-sized) flushed to the columns every BLOCK rows:
+  // one sequential write stream instead of one per curve.
+  const blk = new Float64Array(BLOCK * nc);
+  let br = 0;
+  let base = 0;
+  let row0 = st.row;
+  let row = st.row;
+  let i = st.i;
+  let line = st.line;
   let c = 0;
-
-  let ls = start;
+  let ls = i;
+  let done = true;
   while (i < n) {
     ls = i;
     c = bytes[i];
@@ -139,8 +190,9 @@ export function scanDataFast(bytes: Uint8Array, start: number, p: DataScanParams
       continue;
     }
     if (row >= cap) {
-      cap *= 2;
-      grow(cols, cap);
+      i = ls;
+      done = false;
+      break;
     }
     let col = 0;
     let numeric = 0;
@@ -156,25 +208,24 @@ export function scanDataFast(bytes: Uint8Array, start: number, p: DataScanParams
         c = bytes[++i];
       }
       let mant = 0;
-      let digits = 0;
       let exp = 0;
-      let any = false;
+      const ds = i;
       while (c >= 48 && c <= 57) {
         mant = mant * 10 + (c - 48);
-        if (mant !== 0) digits++;
-        any = true;
         c = bytes[++i];
       }
+      let nd = i - ds;
       if (c === 46) {
-        c = bytes[++i];
+        const fs = ++i;
+        c = bytes[i];
         while (c >= 48 && c <= 57) {
           mant = mant * 10 + (c - 48);
-          if (mant !== 0) digits++;
-          exp--;
-          any = true;
           c = bytes[++i];
         }
+        exp = fs - i;
+        nd -= exp;
       }
+      let any = nd > 0;
       if (any && (c === 101 || c === 69)) {
         c = bytes[++i];
         let eneg = false;
@@ -185,16 +236,16 @@ export function scanDataFast(bytes: Uint8Array, start: number, p: DataScanParams
           c = bytes[++i];
         }
         let e = 0;
-        let eany = false;
+        const es = i;
         while (c >= 48 && c <= 57) {
           if (e < 100000) e = e * 10 + (c - 48);
-          eany = true;
           c = bytes[++i];
         }
-        if (!eany) any = false;
+        if (i === es) any = false;
         exp += eneg ? -e : e;
       }
-      if (any && (c === 32 || c === 9 || c === 10 || c === 13 || i >= n) && digits <= 15 && exp >= -22 && exp <= 22) {
+      // Clinger's fast path: an exact mantissa (<= 2^53) and an exact power of ten (|exp| <= 22).
+      if (any && (c === 32 || c === 9 || c === 10 || c === 13 || i >= n) && mant <= 9007199254740992 && exp >= -22 && exp <= 22) {
         v = exp < 0 ? mant / POW10[-exp] : exp > 0 ? mant * POW10[exp] : mant;
         if (neg) v = -v;
         numeric++;
@@ -216,9 +267,9 @@ export function scanDataFast(bytes: Uint8Array, start: number, p: DataScanParams
       if (v === nullV) v = Number.NaN;
       else if (v === a0 || v === a1 || v === a2) {
         v = Number.NaN;
-        aliasNulls++;
+        st.aliasNulls++;
       }
-      if (col < nc) cols[col][row] = v;
+      if (col < nc) blk[base + col] = v;
       col++;
       while (c === 32 || c === 9) c = bytes[++i];
       if (c === 10 || c === 13 || i >= n) break;
@@ -229,14 +280,24 @@ export function scanDataFast(bytes: Uint8Array, start: number, p: DataScanParams
     }
     if (badTokens) for (const t of badTokens) log.add('warning', line, notANumber(line, t), TOPIC_TOKEN);
     if (col !== nc) {
-      mismatched++;
-      firstMismatch ??= { line, values: col };
+      st.mismatched++;
+      st.firstMismatch ??= { line, values: col };
       log.add('error', line, mismatchMessage(line, col, nc), col < nc ? TOPIC_SHORT : TOPIC_LONG);
-      for (let k = col; k < nc; k++) cols[k][row] = Number.NaN;
+      for (let k = col; k < nc; k++) blk[base + k] = Number.NaN;
     }
     row++;
+    if (++br === BLOCK) {
+      flush(blk, cols, row0, br);
+      row0 = row;
+      br = 0;
+    }
+    base = br * nc;
   }
-  return { columns: trim(cols, row), rows: row, end: Math.min(i, n), endLine: line, mismatchedRows: mismatched, firstMismatch, aliasNulls };
+  if (br > 0) flush(blk, cols, row0, br);
+  st.i = Math.min(i, n);
+  st.line = line;
+  st.row = row;
+  st.done = done;
 }
 
 const SPACE_TOKENS = /"[^"]*"?|[^ \t]+/g;

@@ -2,7 +2,7 @@
  * Number parsing for LAS data and header values.
  *
  * The byte scanner parses plain decimals itself (sign, digits, point, exponent) and keeps the
- * result exact: with at most 15 significant digits and a power of ten within 10^±22, the
+ * result exact: with a mantissa of at most 2^53 and a power of ten within 10^±22, the
  * mantissa and the power are both exact doubles, so one IEEE multiplication or division
  * gives the correctly rounded value (Clinger, W.D. (1990) How to read floating point numbers
  * accurately, PLDI '90, the "fast path"). Anything else goes through {@link parseNumberText}.

@@ -9,7 +9,7 @@
  *
  * Noise (model choices, in the range of published tool repeatabilities // common practice):
  * GR sd 0.25 sqrt(GR) gAPI (counting statistics scale with the square root of the count);
- * RHOB sd 0.010 g/cm3; DRHO sd 0.004 g/cm3; NPHI sd 0.008 v/v; DT sd 0.8 us/ft; RT
+ * RHOB sd 0.008 g/cm3; DRHO sd 0.004 g/cm3; NPHI sd 0.008 v/v; DT sd 0.8 us/ft; RT
  * multiplicative, log-normal sd 0.03; SP sd 0.4 mV plus a baseline drift of 1.2 mV per 100 ft;
  * CALI sd 0.03 in.
  */
@@ -59,6 +59,8 @@ export interface SynthesizeOptions {
   run?: string;
   /** Add noise, washouts and null runs (default true). */
   noise?: boolean;
+  /** Seed of the noise streams (default FIELD_SEED). */
+  seed?: number;
 }
 
 /** Mudcake on permeable rock, inches of hole-diameter reduction (model choice: 1/8 in each side). */
@@ -75,7 +77,7 @@ export function synthesizeLogs(col: WellColumn, options: SynthesizeOptions = {})
   const depth = new Float64Array(n);
   const md = new Float64Array(n);
   const curves = Object.fromEntries(CURVE_KEYS.map((k) => [k, new Float64Array(n)])) as Record<CurveKey, Float64Array>;
-  const rng = Object.fromEntries(CURVE_KEYS.map((k) => [k, createRandom(FIELD_SEED, `${w.name}/${run}/${k}`)])) as Record<
+  const rng = Object.fromEntries(CURVE_KEYS.map((k) => [k, createRandom(options.seed ?? FIELD_SEED, `${w.name}/${run}/${k}`)])) as Record<
     CurveKey,
     ReturnType<typeof createRandom>
   >;
@@ -122,7 +124,7 @@ export function synthesizeLogs(col: WellColumn, options: SynthesizeOptions = {})
         }
       }
       gr += rng.GR.normal(0, 0.25 * Math.sqrt(Math.max(gr, 1)));
-      rhob += rng.RHOB.normal(0, 0.01);
+      rhob += rng.RHOB.normal(0, 0.008);
       drho += rng.DRHO.normal(0, 0.004);
       nphi += rng.NPHI.normal(0, 0.008);
       dt += rng.DT.normal(0, 0.8);

@@ -6,7 +6,7 @@
  * |--------------------|------------|----------------------------------------------------------|-------------------|
  * | Greyling Shale     | shale      | seal                                                     | water             |
  * | Fenna Sand         | sandstone  | upper clean sand, lower shalier sand                     | gas over water    |
- * | Marrow Shale       | shale      | shale, a 4 ft sand (the thin bed), shale                 | thin bed: oil/water |
+ * | Marrow Shale       | shale      | shale, a 5 ft sand (the thin bed), shale                 | thin bed: oil/water |
  * | Wren Sand          | sandstone  | 3.5 ft calcite-cemented streak (the tight streak), upper and lower sand | gas cap, oil leg, water |
  * | Tillet Shaly Sand  | shaly sand | one shaly sand                                           | oil/water (Wren contacts) |
  * | Corrie Limestone   | limestone  | porous limestone, tight limestone                        | water             |
@@ -65,7 +65,7 @@ export const FORMATIONS: readonly Formation[] = [
     isochore: (x, y) => 60 - 0.0009 * x + 0.0006 * y,
     layers: [
       shaleLayer('Marrow upper shale', 0.42),
-      { name: 'Marrow thin sand', lithology: 'sandstone', thickness: { kind: 'fixed', ft: 4 }, porosity: 0.19, vsh: 0.1, sw: { gas: 0.3, oil: 0.34, water: 1 }, compartment: 'Marrow thin sand' },
+      { name: 'Marrow thin sand', lithology: 'sandstone', thickness: { kind: 'fixed', ft: 5 }, porosity: 0.19, vsh: 0.1, sw: { gas: 0.3, oil: 0.34, water: 1 }, compartment: 'Marrow thin sand' },
       shaleLayer('Marrow lower shale', 0.58),
     ],
   },

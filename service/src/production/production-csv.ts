@@ -34,7 +34,7 @@ interface Rows {
 
 function readRows(text: string, problems: CsvProblem[]): Rows | null {
   const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ''), { skipEmptyLines: false, delimiter: '' });
-  for (const e of parsed.errors) problems.push({ line: typeof e.row === 'number' ? e.row + 1 : null, message: e.message });
+  for (const e of parsed.errors) if (e.type !== 'Delimiter') problems.push({ line: typeof e.row === 'number' ? e.row + 1 : null, message: e.message });
   let header: string[] | null = null;
   let headerLine = 0;
   const rows: Rows['rows'] = [];

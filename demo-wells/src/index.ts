@@ -30,6 +30,8 @@ export type { AccumulationVolume, AccumulationWellInput } from './model/volumes.
 export { compareWithModel, compareVolumesWithModel, POROSITY_TOLERANCE, SW_TOLERANCE, VOLUME_TOLERANCE } from './check/compare.js';
 export type { ComparisonRow, VolumeComparisonRow, EvaluatedWell, EvaluatedZone, EvaluatedInterval, ComparedQuantity } from './check/compare.js';
 export { canonicalLog, spliceRuns } from './check/well-curves.js';
+export { evaluateDemoWell, demoWellLog } from './check/evaluate-demo.js';
+export type { DemoWellFiles } from './check/evaluate-demo.js';
 export type { CanonicalLog, CanonicalKey } from './check/well-curves.js';
 export { parseTopsCsv, parseSurveyCsv } from './check/text-files.js';
 export type { TopRow, SurveyRow } from './check/text-files.js';
@@ -39,5 +41,5 @@ export { demoFileEntries, demoLasFiles } from './files.js';
 export type { DemoFileEntry, DemoFileKind } from './files.js';
 export { generateDemoField } from './generate.js';
 export type { GeneratedFile } from './generate.js';
-export { demoFieldFiles, allDemoFiles, readDemoFile, readDemoText, DEMO_DATA_DIR } from './load.js';
+export { demoFieldFiles, allDemoFiles, readDemoFile, readDemoText, demoTops, demoSurvey, DEMO_DATA_DIR } from './load.js';
 export type { DemoFieldFile } from './load.js';

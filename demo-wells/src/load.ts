@@ -5,6 +5,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
+import { type SurveyRow, type TopRow, parseSurveyCsv, parseTopsCsv } from './check/text-files.js';
 import { type DemoFileEntry, demoFileEntries, demoLasFiles } from './files.js';
 
 /** Absolute path of demo-wells/data/ (from src/ or dist/, both one level below the package). */
@@ -35,4 +36,15 @@ export function demoFieldFiles(): DemoFieldFile[] {
 /** Every demo file (LAS, tops, wells, surveys, production, model, README) with its bytes. */
 export function allDemoFiles(): (DemoFileEntry & { bytes: Uint8Array })[] {
   return demoFileEntries().map((e) => ({ ...e, bytes: readDemoFile(e.path) }));
+}
+
+/** The formation tops of every demo well (data/tops.csv), MD in each well's depth unit. */
+export function demoTops(): TopRow[] {
+  return parseTopsCsv(readDemoText('tops.csv'));
+}
+
+/** The deviation survey of a demo well (MD ft, inclination and azimuth in degrees), or null for a vertical well. */
+export function demoSurvey(wellName: string): SurveyRow[] | null {
+  const e = demoFileEntries().find((k) => k.kind === 'survey' && k.wellName === wellName);
+  return e ? parseSurveyCsv(readDemoText(e.path)) : null;
 }

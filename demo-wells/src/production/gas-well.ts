@@ -65,13 +65,29 @@ function zAt(p: number, tR: number, ppc: number, tpc: number): number {
   return zFactorDak(tR / tpc, p / ppc);
 }
 
-/** Pressure whose p/z equals `target` (bisection on [14.7, pMax]; p/z rises with p here). */
-function pressureFromPz(target: number, pMax: number, tR: number, ppc: number, tpc: number): number {
+/**
+ * Pressure whose p/z equals `target`: secant iteration from `guess` (p/z rises smoothly with p
+ * here), to 1e-9 psi; bisection on [14.7, pMax] if the secant leaves the bracket.
+ */
+function pressureFromPz(target: number, guess: number, pMax: number, tR: number, ppc: number, tpc: number): number {
+  const f = (p: number) => p / zAt(p, tR, ppc, tpc) - target;
+  let p0 = guess;
+  let p1 = guess * 0.999;
+  let f0 = f(p0);
+  for (let k = 0; k < 50; k++) {
+    const f1 = f(p1);
+    if (f1 === 0 || Math.abs(p1 - p0) < 1e-9) return p1;
+    const p2 = p1 - (f1 * (p1 - p0)) / (f1 - f0);
+    if (!(p2 > 14.7 && p2 < pMax)) break;
+    p0 = p1;
+    f0 = f1;
+    p1 = p2;
+  }
   let lo = 14.7;
   let hi = pMax;
   for (let k = 0; k < 100; k++) {
     const mid = 0.5 * (lo + hi);
-    if (mid / zAt(mid, tR, ppc, tpc) < target) lo = mid;
+    if (f(mid) < 0) lo = mid;
     else hi = mid;
   }
   return 0.5 * (lo + hi);
@@ -89,6 +105,7 @@ export function gasWellProduction(input: GasWellInput): GasWellProduction {
   const noise = createRandom(input.seed, `${input.well}/gauge`);
   const G = input.gasInPlaceScf / 1000; // Mscf
   let gp = 0; // Mscf, exact
+  let p = pi;
   let gpReported = 0; // Mscf, sum of rounded monthly volumes
   const monthly: GasMonth[] = [];
   const pressures: StaticPressure[] = [];
@@ -96,7 +113,7 @@ export function gasWellProduction(input: GasWellInput): GasWellProduction {
   for (let k = 0; k < input.months; k++) {
     const m = monthLabel(input.startYear, input.startMonth, k);
     if (k % 6 === 0) {
-      const p = pressureFromPz(pzi * (1 - gp / G), pi * 1.01, tR, ppcPsia, tpcR);
+      p = pressureFromPz(pzi * (1 - gp / G), p, pi * 1.01, tR, ppcPsia, tpcR);
       pressures.push({ date: `${m.label}-01`, cumGasMmscf: gpReported / 1000, pressurePsia: Math.round(p + noise.normal(0, 4)) });
     }
     const days = daysInMonth(m.year, m.month);
@@ -104,7 +121,7 @@ export function gasWellProduction(input: GasWellInput): GasWellProduction {
     const daysOn = days - down;
     let vol = 0;
     for (let d = 0; d < daysOn; d++) {
-      const p = pressureFromPz(pzi * (1 - gp / G), pi * 1.01, tR, ppcPsia, tpcR);
+      p = pressureFromPz(pzi * (1 - gp / G), p, pi * 1.01, tR, ppcPsia, tpcR);
       const q = p > PWF ? c * Math.pow(p * p - PWF * PWF, N_EXP) : 0;
       vol += q;
       gp += q;

@@ -52,6 +52,34 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
                 return { Component: WellRoute, loader: wellLoader(queryClient) };
               },
             },
+            {
+              path: 'assets/:assetId/wells/:wellId/workbench',
+              lazy: async () => {
+                const { WorkbenchRoute, workbenchLoader } = await import('./routes/workbench');
+                return { Component: WorkbenchRoute, loader: workbenchLoader(queryClient) };
+              },
+            },
+            {
+              path: 'assets/:assetId/formations',
+              lazy: async () => {
+                const { FormationsRoute, formationsLoader } = await import('./routes/formations');
+                return { Component: FormationsRoute, loader: formationsLoader(queryClient) };
+              },
+            },
+            {
+              path: 'assets/:assetId/zone-table',
+              lazy: async () => {
+                const { ZoneTableRoute, zoneTableLoader } = await import('./routes/zone-table');
+                return { Component: ZoneTableRoute, loader: zoneTableLoader(queryClient) };
+              },
+            },
+            {
+              path: 'assets/:assetId/audit',
+              lazy: async () => {
+                const { AuditRoute, auditLoader } = await import('./routes/audit');
+                return { Component: AuditRoute, loader: auditLoader(queryClient) };
+              },
+            },
             { path: '*', Component: NotFoundRoute },
           ],
         },

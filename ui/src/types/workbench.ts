@@ -3,6 +3,7 @@
  * check, survey, zone parameters, interpretations, review, audit, zone tables), as the UI reads
  * them. Depths are in the well's `depthUnit`; fractions (Vsh, porosity, Sw, N/G) are v/v.
  */
+import type { ZoneSummary } from '@poreline/core';
 
 export interface Cutoffs {
   /** Net reservoir passes when Vsh <= vshMax (v/v). */
@@ -123,24 +124,8 @@ export interface WorkbenchDto {
 
 export type ReviewStatus = 'draft' | 'submitted' | 'approved' | 'returned';
 
-/** A zone's summary as the server stores it (core's summary shape; extra fields kept). */
-export interface ZoneSummaryDto {
-  formation?: string;
-  name?: string;
-  formationId?: string;
-  top?: number;
-  base?: number;
-  gross: number;
-  netReservoir: number;
-  netPay: number;
-  ntg?: number;
-  phiMean?: number | null;
-  swMean?: number | null;
-  vshMean?: number | null;
-  phiH?: number;
-  hcpt?: number;
-  [key: string]: unknown;
-}
+/** A zone's summary as the server stores it: core's ZoneSummary (evaluateWell on the server). */
+export type ZoneSummaryDto = ZoneSummary;
 
 export interface InterpretationDto {
   id: string;

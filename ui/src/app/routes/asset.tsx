@@ -1,6 +1,6 @@
 import { Badge, Callout, Card, Flex, Heading, Text } from '@radix-ui/themes';
 import type { QueryClient } from '@tanstack/react-query';
-import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { Breadcrumbs } from '../../components/breadcrumbs';
 import { PageSpinner } from '../../components/page-spinner';
 import { PanelErrorBoundary } from '../../components/panel-error-boundary';
@@ -49,6 +49,7 @@ export function AssetRoute() {
           {me.data ? <Badge variant="soft">{roleInAsset(me.data, assetId) ?? asset.data.role}</Badge> : null}
         </Flex>
         {asset.data.description ? <Text color="gray">{asset.data.description}</Text> : null}
+        <AssetLinks assetId={assetId} showAudit={me.data ? ['admin', 'reviewer'].includes(roleInAsset(me.data, assetId) ?? '') : false} />
       </Flex>
 
       {canEdit ? (
@@ -79,5 +80,26 @@ export function AssetRoute() {
         </PanelErrorBoundary>
       </Flex>
     </Flex>
+  );
+}
+
+/** Links to the asset's formations, zone table and (admins, reviewers) audit log. */
+function AssetLinks({ assetId, showAudit }: { assetId: string; showAudit: boolean }) {
+  return (
+    <nav aria-label="Asset pages">
+      <Flex gap="4" mt="1">
+        <Link className="strong-link" to={`/assets/${assetId}/formations`}>
+          Formations and cutoffs
+        </Link>
+        <Link className="strong-link" to={`/assets/${assetId}/zone-table`}>
+          Zone table
+        </Link>
+        {showAudit ? (
+          <Link className="strong-link" to={`/assets/${assetId}/audit`}>
+            Audit log
+          </Link>
+        ) : null}
+      </Flex>
+    </nav>
   );
 }

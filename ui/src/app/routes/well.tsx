@@ -1,7 +1,7 @@
 import { Callout, Card, DataList, Flex, Heading, Select, Text } from '@radix-ui/themes';
 import type { QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { Breadcrumbs } from '../../components/breadcrumbs';
 import { PageSpinner } from '../../components/page-spinner';
 import { PanelErrorBoundary } from '../../components/panel-error-boundary';
@@ -54,9 +54,14 @@ export function WellRoute() {
         ]}
       />
       <Flex direction="column" gap="2">
-        <Heading as="h1" size="7">
-          {w.name}
-        </Heading>
+        <Flex align="baseline" gap="4" wrap="wrap">
+          <Heading as="h1" size="7">
+            {w.name}
+          </Heading>
+          <Link className="strong-link" to={`/assets/${assetId}/wells/${wellId}/workbench`}>
+            Open the workbench
+          </Link>
+        </Flex>
         <DataList.Root orientation="horizontal" size="2">
           <DataList.Item>
             <DataList.Label>UWI</DataList.Label>

@@ -154,7 +154,7 @@ describe('production data and cross-checks (p/z, Arps decline, inflow)', () => {
         r.on('end', () => cb(null, Buffer.concat(chunks)));
       });
     const wb = new ExcelJS.Workbook();
-    await wb.xlsx.load(xlsx.body as Buffer);
+    await wb.xlsx.load(Uint8Array.from(xlsx.body as Buffer).buffer);
     const sheet = wb.getWorksheet('Cross-checks')!;
     const texts: string[] = [];
     sheet.eachRow((row) => texts.push(row.values?.toString() ?? ''));

@@ -318,7 +318,7 @@ describe('reserves cases: sources, overrides, runs, review and export', () => {
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/spreadsheetml/);
     const wb = new ExcelJS.Workbook();
-    await wb.xlsx.load(res.body as Buffer);
+    await wb.xlsx.load(Uint8Array.from(res.body as Buffer).buffer);
     expect(wb.worksheets.map((w) => w.name)).toEqual(expect.arrayContaining(['Summary', 'Sources', 'Inputs', 'Deterministic', 'Probabilistic', 'Tornado', 'Cross-checks', 'Audit']));
     const summary = wb.getWorksheet('Summary')!;
     expect(String(summary.getRow(2).getCell(2).value)).toMatch(/SPE-PRMS/);

@@ -1,9 +1,22 @@
 import { BindingsModule } from '../bindings/bindings.module.js';
 import { CurveCheckModule } from '../curve-check/curve-check.module.js';
+import { CutoffsModule } from '../cutoffs/cutoffs.module.js';
 import { FormationsModule } from '../formations/formations.module.js';
+import { InterpretationsModule } from '../interpretations/interpretations.module.js';
 import { SurveysModule } from '../surveys/surveys.module.js';
 import { TopsModule } from '../tops/tops.module.js';
 import { ZoneParametersModule } from '../zone-parameters/zone-parameters.module.js';
+import { WorkbenchModule } from './workbench.module.js';
 
 /** The well workbench feature modules (formations to interpretations), registered by AppModule. */
-export const WORKBENCH_MODULES = [FormationsModule, TopsModule, BindingsModule, CurveCheckModule, SurveysModule, ZoneParametersModule];
+export const WORKBENCH_MODULES = [
+  FormationsModule,
+  CutoffsModule,
+  TopsModule,
+  BindingsModule,
+  CurveCheckModule,
+  SurveysModule,
+  ZoneParametersModule,
+  WorkbenchModule,
+  InterpretationsModule,
+];

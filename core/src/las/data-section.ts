@@ -152,6 +152,8 @@ function fastLoop(bytes: Uint8Array, cols: Float64Array[], st: FastState, p: Dat
   const a0 = p.nullAliases.length > 0 ? p.nullAliases[0] : nullV;
   const a1 = p.nullAliases.length > 1 ? p.nullAliases[1] : nullV;
   const a2 = p.nullAliases.length > 2 ? p.nullAliases[2] : nullV;
+  const nullMin = Math.min(nullV, a0, a1, a2);
+  const nullMax = Math.max(nullV, a0, a1, a2);
   const cap = st.cap;
   // Rows go to a small row-major block (L1-sized) flushed to the columns every BLOCK rows:
   // one sequential write stream instead of one per curve.
@@ -264,10 +266,12 @@ function fastLoop(bytes: Uint8Array, cols: Float64Array[], st: FastState, p: Dat
           }
         }
       }
-      if (v === nullV) v = Number.NaN;
-      else if (v === a0 || v === a1 || v === a2) {
-        v = Number.NaN;
-        st.aliasNulls++;
+      if (v >= nullMin && v <= nullMax) {
+        if (v === nullV) v = Number.NaN;
+        else if (v === a0 || v === a1 || v === a2) {
+          v = Number.NaN;
+          st.aliasNulls++;
+        }
       }
       if (col < nc) blk[base + col] = v;
       col++;

@@ -20,6 +20,7 @@ export function toLogRunDto(run: LogRunSummary): LogRunDto {
     curveCount: run.curveCount,
     uploadedAt: run.uploadedAt.toISOString(),
     uploadedBy: run.uploadedBy,
+    uploadedByName: run.uploadedByName,
   };
 }
 
@@ -48,6 +49,8 @@ export function toWellRowDto<R extends LogRunDto>(well: Well, runs: R[]): WellRo
     id: well.id,
     name: well.name,
     uwi: well.uwi,
+    latitude: well.latitude,
+    longitude: well.longitude,
     kbElevation: well.kbElevation,
     groundElevation: well.groundElevation,
     depthReference: well.depthReference,

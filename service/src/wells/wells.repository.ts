@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { curves, logRuns, wells, type Curve, type LogRun, type NewWell, type Well } from '@poreline/schema';
+import { auditLog, curves, logRuns, users, wells, type Curve, type LogRun, type NewAuditEntry, type NewWell, type Well } from '@poreline/schema';
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import { DatabaseService } from '../database/database.module.js';
 
@@ -20,9 +20,10 @@ const logRunColumns = {
   rowCount: logRuns.rowCount,
   curveCount: logRuns.curveCount,
   uploadedBy: logRuns.uploadedBy,
+  uploadedByName: users.name,
   uploadedAt: logRuns.uploadedAt,
 };
-export type LogRunSummary = Omit<LogRun, 'original' | 'header'>;
+export type LogRunSummary = Omit<LogRun, 'original' | 'header'> & { uploadedByName: string | null };
 
 const curveColumns = {
   id: curves.id,
@@ -68,9 +69,18 @@ export class WellsRepository {
     return row;
   }
 
+  /** Applies a patch and writes its audit entry, in one transaction. */
+  update(wellId: string, patch: Partial<NewWell>, audit: (row: Well) => Omit<NewAuditEntry, 'id' | 'at'>): Promise<Well> {
+    return this.database.db.transaction(async (tx) => {
+      const [row] = await tx.update(wells).set(patch).where(eq(wells.id, wellId)).returning();
+      await tx.insert(auditLog).values(audit(row));
+      return row;
+    });
+  }
+
   logRunsOf(wellIds: string[]): Promise<LogRunSummary[]> {
     if (!wellIds.length) return Promise.resolve([]);
-    return this.database.db.select(logRunColumns).from(logRuns).where(inArray(logRuns.wellId, wellIds)).orderBy(asc(logRuns.uploadedAt));
+    return this.database.db.select(logRunColumns).from(logRuns).leftJoin(users, eq(users.id, logRuns.uploadedBy)).where(inArray(logRuns.wellId, wellIds)).orderBy(asc(logRuns.uploadedAt));
   }
 
   curvesOf(logRunIds: string[]): Promise<CurveSummary[]> {

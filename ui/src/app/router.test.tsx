@@ -31,7 +31,8 @@ const run = {
   rowCount: 5,
   curveCount: 3,
   uploadedAt: '2026-01-10T09:00:00Z',
-  uploadedBy: 'Pat Doe',
+  uploadedBy: '00000000-0000-4000-8000-000000000001',
+  uploadedByName: 'Pat Doe',
 };
 
 const wellRow: WellRow = { id: 'w1', name: 'Heron-1', uwi: '100/01', logRunCount: 1, curveCount: 2, top: 1500, base: 1502, depthUnit: 'm', logRuns: [run] };

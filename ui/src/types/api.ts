@@ -48,6 +48,7 @@ export interface LogRun {
   curveCount: number;
   uploadedAt: string;
   uploadedBy: string | null;
+  uploadedByName: string | null;
 }
 
 export interface WellRow {

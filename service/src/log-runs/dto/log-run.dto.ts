@@ -33,6 +33,7 @@ export class LogRunDto {
   @ApiProperty() curveCount: number;
   @ApiProperty() uploadedAt: string;
   @ApiProperty({ nullable: true }) uploadedBy: string | null;
+  @ApiProperty({ nullable: true, description: 'Name of the user who uploaded the file' }) uploadedByName: string | null;
 }
 
 export class LogRunDetailDto extends LogRunDto {

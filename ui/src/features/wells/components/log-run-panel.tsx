@@ -49,7 +49,7 @@ export function LogRunPanel({ run }: LogRunPanelProps) {
               <DataList.Label>Loaded</DataList.Label>
               <DataList.Value>
                 {formatDateTime(run.uploadedAt)}
-                {run.uploadedBy ? ` by ${run.uploadedBy}` : ''}
+                {run.uploadedByName ? ` by ${run.uploadedByName}` : ''}
               </DataList.Value>
             </DataList.Item>
             <DataList.Item>

@@ -73,7 +73,9 @@ describe('buildDepthView', () => {
 });
 
 describe('isResistivityClass', () => {
-  it('isResistivityClass accepts classes starting with "resistivity" and nothing else', () => {
+  it('isResistivityClass accepts the resistivity classes core recognises, and nothing else', () => {
+    expect(isResistivityClass('deep_resistivity')).toBe(true);
+    expect(isResistivityClass('shallow_resistivity')).toBe(true);
     expect(isResistivityClass('resistivity_deep')).toBe(true);
     expect(isResistivityClass('Resistivity')).toBe(true);
     expect(isResistivityClass('gamma_ray')).toBe(false);

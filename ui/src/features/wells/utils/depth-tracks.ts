@@ -64,7 +64,7 @@ export interface DepthViewGeometry {
 
 /** Whether a curve class is drawn on a logarithmic scale (resistivity classes). */
 export function isResistivityClass(curveClass: string | null | undefined): boolean {
-  return typeof curveClass === 'string' && curveClass.toLowerCase().startsWith('resistivity');
+  return typeof curveClass === 'string' && curveClass.toLowerCase().split('_').includes('resistivity');
 }
 
 /**

@@ -5,6 +5,7 @@
 import { defaultZoneParameters } from '../src/evaluation/zone-parameters.js';
 import { type EvaluateWellInput, evaluateWell } from '../src/evaluation/pipeline.js';
 import type { ZoneParameters } from '../src/evaluation/zone-parameters.js';
+import { summariseZones } from '../src/evaluation/zone-summary.js';
 
 const N = 1_000_000;
 const ZONES = 20;
@@ -87,6 +88,9 @@ const cases: [string, EvaluateWellInput][] = [
 // them alike; we report the median and the best of the rounds.
 const ROUNDS = 15;
 const jobs: [string, () => unknown][] = [['floor: read inputs, write outputs, read back', floor], ...cases.map(([name, inp]) => [name, () => evaluateWell(inp)] as [string, () => unknown])];
+// What the browser re-runs while a cutoff slider moves: summaries on the computed curves.
+const done = evaluateWell(cases[0][1]);
+jobs.push(['summariseZones only (cutoff slider move)', () => summariseZones({ depth, curves: { VSH: done.curves.VSH, PHIE: done.curves.PHIE, SW: done.curves.SW }, qc: done.qc, zones: cases[0][1].zones, cutoffs: cases[0][1].cutoffs })]);
 for (const [, fn] of jobs) for (let w = 0; w < 3; w++) fn();
 const wall = jobs.map(() => [] as number[]);
 const cpu = jobs.map(() => [] as number[]);

@@ -68,6 +68,20 @@ describe('scanDataFast', () => {
     );
   });
 
+  it('scanDataFast grows its columns when rows get longer mid-section and matches scanDataGeneral', () => {
+    // 100 short rows then 5000 long ones: the first size estimate is far too small.
+    const lines = [
+      ...Array.from({ length: 100 }, (_, r) => `${r} 1 2`),
+      ...Array.from({ length: 5000 }, (_, r) => `${100 + r}.000000001 ${(r * 1.000001).toFixed(9)} ${(-r / 7).toExponential(12)}`),
+    ];
+    const bytes = enc.encode(lines.join('\n'));
+    const f = scanDataFast(bytes, 0, params(3));
+    const g = scanDataGeneral(bytes, 0, params(3));
+    expect(f.rows).toBe(5100);
+    for (let c = 0; c < 3; c++) expect(Array.from(f.columns[c])).toEqual(Array.from(g.columns[c]));
+    expect(f.columns[1][5099]).toBe(Number((4999 * 1.000001).toFixed(9)));
+  });
+
   it('scanDataFast stops at a line starting with ~ and reports where', () => {
     const r = scanDataFast(enc.encode('1 2\n3 4\n  ~Other\ntext'), 0, params(2));
     expect(r.rows).toBe(2);

@@ -210,7 +210,51 @@ export function applyInputsPatch(current: CaseInputs, patch: CaseInputsPatch, wh
     next.wellOverrides = out;
   }
   if (patch.distributions) next.distributions = patch.distributions as CaseInputs['distributions'];
+  convertUnits(current, patch, next);
   return next;
+}
+
+const ACRES_PER_KM2 = 1e6 / 4046.8564224; // NIST SP 811 acre (43,560 international ft2)
+const M_PER_FT = 0.3048; // NIST SP 811, exact
+
+/** A distribution of a quantity measured in a unit k times larger: every parameter scales by k. */
+export function scaleDistribution(d: Distribution, k: number): Distribution {
+  const t = 'truncate' in d && d.truncate ? { truncate: { ...(d.truncate.min !== undefined ? { min: d.truncate.min * k } : {}), ...(d.truncate.max !== undefined ? { max: d.truncate.max * k } : {}) } } : {};
+  switch (d.kind) {
+    case 'fixed':
+      return { kind: 'fixed', value: d.value * k };
+    case 'uniform':
+      return { kind: 'uniform', min: d.min * k, max: d.max * k, ...t };
+    case 'triangular':
+      return { kind: 'triangular', min: d.min * k, mode: d.mode * k, max: d.max * k, ...t };
+    case 'normal':
+      return { kind: 'normal', mean: d.mean * k, sd: d.sd * k, ...t };
+    case 'lognormal':
+      return 'p90' in d ? { kind: 'lognormal', p90: d.p90 * k, p10: d.p10 * k, ...t } : { kind: 'lognormal', mean: d.mean * k, sd: d.sd * k, ...t };
+  }
+}
+
+/**
+ * When the area or length unit changes, values stored in the old unit that the patch does not
+ * replace (area, drainage areas, net pay overrides, area/net pay distributions) are converted,
+ * so a unit change never silently reinterprets a number.
+ */
+function convertUnits(current: CaseInputs, patch: CaseInputsPatch, next: CaseInputs): void {
+  if (patch.areaUnit && patch.areaUnit !== current.areaUnit) {
+    const k = patch.areaUnit === 'km2' ? 1 / ACRES_PER_KM2 : ACRES_PER_KM2;
+    if (patch.area === undefined && current.area !== null) next.area = current.area * k;
+    if (!patch.drainageAreas) next.drainageAreas = Object.fromEntries(Object.entries(current.drainageAreas).map(([w, a]) => [w, a * k]));
+    if (!patch.distributions && current.distributions.area) next.distributions = { ...next.distributions, area: scaleDistribution(current.distributions.area, k) };
+  }
+  if (patch.lengthUnit && patch.lengthUnit !== current.lengthUnit) {
+    const k = patch.lengthUnit === 'm' ? M_PER_FT : 1 / M_PER_FT;
+    const scale = (o: Override | undefined) => (o ? { ...o, value: o.value * k } : undefined);
+    if (!patch.overrides && current.overrides.netPay) next.overrides = { ...next.overrides, netPay: scale(current.overrides.netPay) };
+    if (!patch.wellOverrides) {
+      next.wellOverrides = Object.fromEntries(Object.entries(current.wellOverrides).map(([w, o]) => [w, o.netPay ? { ...o, netPay: scale(o.netPay) } : o]));
+    }
+    if (!patch.distributions && current.distributions.netPay) next.distributions = { ...next.distributions, netPay: scaleDistribution(current.distributions.netPay, k) };
+  }
 }
 
 /** Stored inputs read back, with defaults for keys an older case may lack. */

@@ -331,6 +331,26 @@ describe('reserves cases: sources, overrides, runs, review and export', () => {
     expect((await t.http.get(`${base()}/${caseId}/export?format=pdf`).set('Authorization', await t.tokenFor('viewer'))).status).toBe(400);
   });
 
+  it('changing the area or length unit converts the stored values it does not replace (640 acres = 1 square mile)', async () => {
+    const made = await t.http
+      .post(base())
+      .set('Authorization', await t.tokenFor('engineer'))
+      .send({
+        name: 'Units',
+        formationId,
+        wellIds: [wellA],
+        inputs: { area: 640, drainageAreas: { [wellA]: 64 }, overrides: { netPay: { value: 100, reason: 'log shows a thicker pay' } }, distributions: { area: { kind: 'uniform', min: 320, max: 960 } } },
+      });
+    const res = await t.http.patch(`${base()}/${made.body.id}`).set('Authorization', await t.tokenFor('engineer')).send({ inputs: { areaUnit: 'km2', lengthUnit: 'm' } });
+    expect(res.status).toBe(200);
+    // 1 square mile = 640 acres = 1609.344^2 m2 = 2.589988110336 km2 (international mile, NIST SP 811)
+    expect(res.body.inputs.area).toBeCloseTo(2.589988110336, 10);
+    expect(res.body.inputs.drainageAreas[wellA]).toBeCloseTo(0.2589988110336, 10);
+    expect(res.body.inputs.distributions.area.max).toBeCloseTo(2.589988110336 * 1.5, 10);
+    expect(res.body.inputs.overrides.netPay.value).toBeCloseTo(30.48, 10);
+    expect(res.body.inputs.overrides.netPay.reason).toBe('log shows a thicker pay');
+  });
+
   it('a case of another asset, or a malformed id, is 404', async () => {
     expect((await t.http.get(`${base()}/${caseId}`).set('Authorization', outsiderToken)).status).toBe(404);
     expect((await t.http.get(`${base()}/not-a-case`).set('Authorization', await t.tokenFor('viewer'))).status).toBe(404);

@@ -2,7 +2,7 @@ import { ConflictException, Injectable, NotFoundException } from '@nestjs/common
 import type { Well } from '@poreline/schema';
 import { AuditService } from '../audit/audit.service.js';
 import type { AuthUser } from '../auth/auth-user.js';
-import type { CreateWellDto, WellDetailDto, WellRowDto } from './dto/well.dto.js';
+import type { CreateWellDto, UpdateWellDto, WellDetailDto, WellRowDto } from './dto/well.dto.js';
 import { toLogRunDetailDto, toLogRunDto, toWellRowDto } from './wells.mapper.js';
 import { WellsRepository } from './wells.repository.js';
 
@@ -41,6 +41,21 @@ export class WellsService {
     });
     await this.audit.record({ assetId, userId: user.id, action: 'create', entity: 'well', entityId: well.id, after: { name: well.name, uwi: well.uwi } });
     return toWellRowDto(well, []);
+  }
+
+  /** Changes the well's identity, location, elevations or depth reference; audited with before and after. */
+  async update(assetId: string, wellId: string, body: UpdateWellDto, user: AuthUser): Promise<WellRowDto> {
+    const well = await this.require(assetId, wellId);
+    const name = body.name?.trim();
+    if (name !== undefined && name !== well.name && (await this.wells.findByName(assetId, name))) throw new ConflictException(`A well named "${name}" already exists in this asset.`);
+    const patch = Object.fromEntries(
+      Object.entries({ ...body, name, uwi: body.uwi?.trim() }).filter(([, v]) => v !== undefined),
+    ) as Partial<Well>;
+    const fields = Object.keys(patch) as (keyof Well)[];
+    const pick = (w: Well) => Object.fromEntries(fields.map((f) => [f, w[f]]));
+    const row = await this.wells.update(well.id, patch, (after) => ({ assetId, userId: user.id, action: 'update', entity: 'well', entityId: well.id, before: pick(well), after: pick(after) }));
+    const runs = await this.wells.logRunsOf([well.id]);
+    return toWellRowDto(row, runs.map(toLogRunDto));
   }
 
   /** The well, if it belongs to the asset; 404 otherwise (no reading across assets). */

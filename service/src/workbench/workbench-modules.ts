@@ -1,11 +1,13 @@
 import { BindingsModule } from '../bindings/bindings.module.js';
 import { CurveCheckModule } from '../curve-check/curve-check.module.js';
 import { CutoffsModule } from '../cutoffs/cutoffs.module.js';
+import { ExportsModule } from '../exports/exports.module.js';
 import { FormationsModule } from '../formations/formations.module.js';
 import { InterpretationsModule } from '../interpretations/interpretations.module.js';
 import { SurveysModule } from '../surveys/surveys.module.js';
 import { TopsModule } from '../tops/tops.module.js';
 import { ZoneParametersModule } from '../zone-parameters/zone-parameters.module.js';
+import { ZoneTablesModule } from '../zone-tables/zone-tables.module.js';
 import { WorkbenchModule } from './workbench.module.js';
 
 /** The well workbench feature modules (formations to interpretations), registered by AppModule. */
@@ -19,4 +21,6 @@ export const WORKBENCH_MODULES = [
   ZoneParametersModule,
   WorkbenchModule,
   InterpretationsModule,
+  ZoneTablesModule,
+  ExportsModule,
 ];

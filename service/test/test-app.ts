@@ -32,6 +32,8 @@ export async function createTestApp(overrides: Partial<AppConfig> = {}): Promise
     jwtSecret: 'test-secret-not-for-production',
     jwtTtl: '1h',
     demoMode: true,
+    // The demo users and empty demo asset only; pass { demoData: 'full' } for the whole demo field.
+    demoData: 'users',
     uploadMaxBytes: 5 * 1024 * 1024,
     ...overrides,
   };

@@ -14,6 +14,12 @@ export interface AppConfig {
   jwtTtl: string;
   /** DEMO_MODE=false starts with no demo users and asks for the first admin. Default true. */
   demoMode: boolean;
+  /**
+   * What the demo seed loads in demo mode (DEMO_DATA): 'full' (default) the whole Wrenmoor
+   * demo field (wells, logs, tops, parameters, interpretations, a reserves case); 'users' only
+   * the organisation, demo users and the empty demo asset (the API tests use this).
+   */
+  demoData?: 'full' | 'users';
   /** Largest LAS file accepted, bytes (UPLOAD_MAX_MB, default 250 MB). */
   uploadMaxBytes: number;
   /** Folder of the built UI to serve at / (UI_DIST); skipped when missing. */
@@ -29,6 +35,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   if (!(maxMb > 0)) throw new Error(`UPLOAD_MAX_MB must be a positive number, got "${env.UPLOAD_MAX_MB}"`);
   const demo = (env.DEMO_MODE ?? 'true').toLowerCase();
   if (!['true', 'false', '1', '0'].includes(demo)) throw new Error(`DEMO_MODE must be true or false, got "${env.DEMO_MODE}"`);
+  const demoData = (env.DEMO_DATA ?? 'full').toLowerCase();
+  if (demoData !== 'full' && demoData !== 'users') throw new Error(`DEMO_DATA must be full or users, got "${env.DEMO_DATA}"`);
   return {
     port,
     dataDir: resolve(env.DATA_DIR ?? 'data'),
@@ -36,6 +44,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     jwtSecret: env.JWT_SECRET || undefined,
     jwtTtl: env.JWT_TTL ?? '12h',
     demoMode: demo === 'true' || demo === '1',
+    demoData,
     uploadMaxBytes: Math.round(maxMb * 1024 * 1024),
     uiDist: env.UI_DIST ? resolve(env.UI_DIST) : undefined,
   };

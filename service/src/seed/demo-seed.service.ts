@@ -1,19 +1,34 @@
-import { Injectable, Logger } from '@nestjs/common';
+import { Inject, Injectable, Logger } from '@nestjs/common';
 import { assetMembers, assets, organisations, users } from '@poreline/schema';
 import bcrypt from 'bcryptjs';
 import { eq } from 'drizzle-orm';
+import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { DatabaseService } from '../database/database.module.js';
+import { DemoFieldSeeder, type DemoFieldReport } from './demo-field.seeder.js';
 import { DEMO_ASSET, DEMO_ORGANISATION, DEMO_USERS } from './demo-users.js';
 
-/** Loads the demo organisation, users (one per role) and asset, once. */
+/**
+ * Loads the demo organisation, users (one per role) and asset, once; then, unless the config
+ * asks for the users only (demoData 'users'), the Wrenmoor demo field (see DemoFieldSeeder).
+ */
 @Injectable()
 export class DemoSeedService {
   private readonly logger = new Logger(DemoSeedService.name);
 
-  constructor(private readonly database: DatabaseService) {}
+  constructor(
+    private readonly database: DatabaseService,
+    private readonly field: DemoFieldSeeder,
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
+  ) {}
 
-  /** Idempotent: does nothing when the demo asset exists. Returns the demo asset id. */
-  async seed(): Promise<{ assetId: string; created: boolean }> {
+  /** Idempotent: creates the users and asset only when the demo asset is missing, and the field only until it is complete. */
+  async seed(): Promise<{ assetId: string; created: boolean; field: DemoFieldReport | null }> {
+    const { assetId, created } = await this.seedUsers();
+    const field = (this.config.demoData ?? 'full') === 'full' ? await this.field.load(assetId) : null;
+    return { assetId, created, field };
+  }
+
+  private async seedUsers(): Promise<{ assetId: string; created: boolean }> {
     const db = this.database.db;
     const [existing] = await db.select({ id: assets.id }).from(assets).where(eq(assets.isDemo, true));
     if (existing) return { assetId: existing.id, created: false };

@@ -5,5 +5,7 @@ import { defineConfig } from 'vitest/config';
 export default defineConfig({
   test: {
     projects: ['core', 'schema', 'demo-wells', 'service', 'ui'],
+    // Two cores; each service test file holds a PGlite instance (~300 MB).
+    maxWorkers: 2,
   },
 });

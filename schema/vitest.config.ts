@@ -6,5 +6,7 @@ export default defineConfig({
   test: {
     name: 'schema',
     include: ['src/**/*.test.ts', 'test/**/*.test.ts'],
+    // A new PGlite database takes ~6 s to initialise (more on a loaded machine).
+    hookTimeout: 60_000,
   },
 });

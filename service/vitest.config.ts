@@ -10,7 +10,5 @@ export default defineConfig({
     globalSetup: ['test/global-setup.ts'],
     testTimeout: 30_000,
     hookTimeout: 60_000,
-    // PGlite holds ~300 MB per instance: keep the number of files in flight small on 2 cores.
-    maxWorkers: 2,
   },
 });

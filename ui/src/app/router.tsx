@@ -80,6 +80,20 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
                 return { Component: AuditRoute, loader: auditLoader(queryClient) };
               },
             },
+            {
+              path: 'assets/:assetId/reserves',
+              lazy: async () => {
+                const { ReservesCasesRoute, reservesCasesLoader } = await import('./routes/reserves-cases');
+                return { Component: ReservesCasesRoute, loader: reservesCasesLoader(queryClient) };
+              },
+            },
+            {
+              path: 'assets/:assetId/reserves/:caseId',
+              lazy: async () => {
+                const { ReservesCaseRoute, reservesCaseLoader } = await import('./routes/reserves-case');
+                return { Component: ReservesCaseRoute, loader: reservesCaseLoader(queryClient) };
+              },
+            },
             { path: '*', Component: NotFoundRoute },
           ],
         },

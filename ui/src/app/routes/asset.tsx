@@ -83,7 +83,7 @@ export function AssetRoute() {
   );
 }
 
-/** Links to the asset's formations, zone table and (admins, reviewers) audit log. */
+/** Links to the asset's formations, zone table, reserves cases and (admins, reviewers) audit log. */
 function AssetLinks({ assetId, showAudit }: { assetId: string; showAudit: boolean }) {
   return (
     <nav aria-label="Asset pages">
@@ -93,6 +93,9 @@ function AssetLinks({ assetId, showAudit }: { assetId: string; showAudit: boolea
         </Link>
         <Link className="strong-link" to={`/assets/${assetId}/zone-table`}>
           Zone table
+        </Link>
+        <Link className="strong-link" to={`/assets/${assetId}/reserves`}>
+          Reserves cases
         </Link>
         {showAudit ? (
           <Link className="strong-link" to={`/assets/${assetId}/audit`}>

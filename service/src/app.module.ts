@@ -10,6 +10,7 @@ import { PayloadTooLargeFilter } from './common/payload-too-large.filter.js';
 import { APP_CONFIG, type AppConfig } from './config/app-config.js';
 import { JWT_SECRET, resolveJwtSecret } from './config/jwt-secret.js';
 import { DatabaseModule } from './database/database.module.js';
+import { DemoCheckModule } from './demo-check/demo-check.module.js';
 import { HealthModule } from './health/health.module.js';
 import { LogRunsModule } from './log-runs/log-runs.module.js';
 import { ProductionModule } from './production/production.module.js';
@@ -39,6 +40,7 @@ export class AppModule {
         HealthModule,
         SetupModule,
         SeedModule,
+        DemoCheckModule,
         ...WORKBENCH_MODULES,
         ...staticUi,
       ],

@@ -106,6 +106,12 @@ describe(DemoSeedService.name, () => {
     expect(p.p50).toBeLessThanOrEqual(p.p10);
   });
 
+  it('the seeded field passes its own model-vs-evaluated check', async () => {
+    const res = await t.http.get(`/api/assets/${assetId}/demo-check`).set('Authorization', await t.tokenFor('viewer'));
+    expect(res.status).toBe(200);
+    expect(res.body.summary).toMatchObject({ allPass: true, volumeRows: 5, volumeRowsPassed: 5 });
+  });
+
   it('is idempotent: a second seed adds nothing, and a seed resumed without its completion marker adds nothing either', async () => {
     const before = await inventory(t, assetId);
     const seed = t.app.get(DemoSeedService);

@@ -196,7 +196,7 @@ export function SummaryTable<T>({ name, rows, columns, rowId, initialSort = [], 
             shown.map((row) => (
               <Table.Row key={row.id}>
                 {row.getVisibleCells().map((cell) => (
-                  <Table.Cell key={cell.id} className={byId.get(cell.column.id)?.kind === 'number' ? 'summary-table__num' : undefined}>
+                  <Table.Cell key={cell.id} className={byId.get(cell.column.id)?.kind === 'number' ? 'summary-table__num' : 'summary-table__text'}>
                     <table.FlexRender cell={cell} />
                   </Table.Cell>
                 ))}

@@ -5,18 +5,24 @@
  * is chosen by its role in Poreline, not by an outside convention.
  */
 
-/** Formation colours, in the order new formations receive them. */
+/**
+ * Formation colours, in the order new formations receive them: the same list, in the same
+ * order, as the service's FORMATION_PALETTE (service/src/formations/formation-palette.ts), which
+ * assigns the colour when none is chosen.
+ */
 export const FORMATION_PALETTE = [
-  '#d9b26f', // dune
-  '#8fb7a3', // lichen
-  '#c7917a', // clay pot
-  '#9aa7cf', // slate lilac
-  '#b8c27a', // reed
-  '#d59db6', // heather
-  '#7fb4c4', // tide pool
-  '#c9a98d', // driftwood
-  '#a3a0c8', // dusk
-  '#9cc08f', // moss
+  '#c9a227', // ochre
+  '#4f9fa8', // lagoon
+  '#b5654a', // rust
+  '#6a7fb0', // slate blue
+  '#a3b86c', // moss
+  '#8c6bb1', // heather
+  '#d98c5f', // apricot
+  '#5b8e7d', // sage
+  '#c97a9c', // rosewood
+  '#7d8a4e', // olive
+  '#b89f7a', // sandstone buff
+  '#5d6d7e', // storm
 ] as const;
 
 /** The formation colour for the n-th formation (cycles through the palette). */

@@ -65,6 +65,7 @@ export type BindingKey = 'gr' | 'sp' | 'cali' | 'rhob' | 'nphi' | 'dt' | 'pe' | 
 export interface BindingDto {
   binding: BindingKey | string;
   logRunId: string;
+  fileName?: string;
   mnemonic: string;
   unit: string;
   confirmed: boolean;
@@ -73,6 +74,8 @@ export interface BindingDto {
 
 export interface CurveCheckRow {
   logRunId: string;
+  fileName?: string;
+  depthUnit?: string;
   mnemonic: string;
   unit: string;
   curveClass: string | null;
@@ -89,9 +92,11 @@ export interface CurveCheckRow {
 }
 
 export interface SurveyDto {
-  stations: { md: number; inclination: number; azimuth: number; tvd?: number }[] | number;
+  fileName?: string;
+  stations: { md: number; inclination: number; azimuth: number }[];
   depthUnit: string;
   tvdAtStations: number[];
+  uploadedAt?: string;
 }
 
 /** One zone's evaluation parameters: the shape core validates (kept open: the server owns it). */
@@ -104,8 +109,12 @@ export interface ZoneParamsDto {
 
 export interface WorkbenchZone {
   formationId: string;
+  /** Zone name = formation name. */
   name: string;
+  /** Formation whose cutoffs apply (the key into `cutoffs`). */
+  formation: string;
   colour: string;
+  isDefault?: boolean;
   top: number;
   base: number;
   params: ZoneParams;
@@ -113,11 +122,16 @@ export interface WorkbenchZone {
 
 export interface WorkbenchDto {
   well: { id: string; name: string; uwi: string | null; [key: string]: unknown };
-  depthUnit: string;
+  depthUnit: 'ft' | 'm' | null;
+  /** Exactly the zones evaluateWell runs on (clipped to the merged index). */
   zones: WorkbenchZone[];
+  /** Zones left out or clipped, and merge problems. */
+  notes?: string[];
   cutoffs: Record<string, Cutoffs>;
   bindings: BindingDto[];
-  survey: { md: number[]; tvd: number[] } | null;
+  /** Stations in core's SurveyStation shape (md, inc, azi), in the well's depth unit. */
+  survey: { depthUnit: 'ft' | 'm'; stations: { md: number; inc: number; azi: number }[]; md: number[]; tvd: number[] } | null;
+  merged?: { start: number; stop: number; step: number; samples: number } | null;
   conventions: unknown;
   latest: InterpretationDto | null;
 }
@@ -135,16 +149,18 @@ export interface InterpretationDto {
   inputs: Record<string, unknown>;
   summaries: ZoneSummaryDto[];
   warnings: unknown[];
-  createdBy: string | { id: string; name: string } | null;
+  createdBy: { id: string; name: string } | null;
+  createdAt?: string;
+  submittedBy?: { id: string; name: string } | null;
   submittedAt: string | null;
   reviewedAt: string | null;
-  reviewedBy: string | { id: string; name: string } | null;
+  reviewedBy: { id: string; name: string } | null;
   reviewComment: string | null;
   updatedAt: string;
 }
 
 export interface AuditEntry {
-  id: string;
+  id: string | number;
   at: string;
   user: { id: string; name: string; email: string } | null;
   action: string;

@@ -24,12 +24,12 @@ export function FormationsManager({ assetId, formations, canEdit }: FormationsMa
   const update = useUpdateFormation(assetId);
   const [recomputed, setRecomputed] = useState<{ formation: string; rows: RecomputedWell[] } | null>(null);
 
+  // The server moves a formation to a position and renumbers the others (refusing an order
+  // that would put any well's tops out of depth order).
   const move = (i: number, dir: -1 | 1) => {
     const a = ordered[i];
-    const b = ordered[i + dir];
-    if (!a || !b) return;
-    update.mutate({ formationId: a.id, input: { ordinal: b.ordinal } });
-    update.mutate({ formationId: b.id, input: { ordinal: a.ordinal } });
+    if (!a || !ordered[i + dir]) return;
+    update.mutate({ formationId: a.id, input: { ordinal: i + 1 + dir } });
   };
 
   return (

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiJson } from '../../../lib/api-client';
 import { assetScope } from '../../../lib/query-keys';
 import type { AuditEntry } from '../../../types/workbench';
@@ -21,6 +21,8 @@ export function auditLogQueryOptions(assetId: string, filter: AuditFilter = {}) 
   return queryOptions({
     queryKey: [...assetScope(assetId), 'audit', filter.entity ?? '', filter.limit ?? 0] as const,
     queryFn: ({ signal }) => getAuditLog(assetId, filter, signal),
+    // Showing older entries keeps the current ones on screen while the longer list loads.
+    placeholderData: keepPreviousData,
   });
 }
 

@@ -1,16 +1,21 @@
-import { Callout, Code, Flex, Table, Text } from '@radix-ui/themes';
+import { Button, Callout, Code, Flex, Table, Text } from '@radix-ui/themes';
 import { useState } from 'react';
 import { formatDateTime } from '../../../lib/format';
 import type { AuditEntry } from '../../../types/workbench';
 import { useAuditLog } from '../api/audit-log';
 
-const ENTITIES = ['', 'interpretation', 'formation', 'tops', 'zone_parameters', 'bindings', 'survey', 'well', 'log_run'];
+const PAGE = 50;
+
+const ENTITIES = ['', 'interpretation', 'formation', 'formation_cutoffs', 'well_tops', 'zone_parameters', 'curve_bindings', 'well_survey', 'well', 'log_run'];
 
 /** What changed between before and after: the top-level keys whose JSON differs. */
 export function changedKeys(before: unknown, after: unknown): string[] {
   const obj = (x: unknown) => (x && typeof x === 'object' && !Array.isArray(x) ? (x as Record<string, unknown>) : null);
-  const b = obj(before);
-  const a = obj(after);
+  const nothing = (x: unknown) => x === null || x === undefined;
+  if (nothing(before) && nothing(after)) return [];
+  // A creation (nothing before) or a deletion (nothing after) lists the other side's keys.
+  const b = obj(before) ?? (nothing(before) ? {} : null);
+  const a = obj(after) ?? (nothing(after) ? {} : null);
   if (!b || !a) return JSON.stringify(before) === JSON.stringify(after) ? [] : ['value'];
   const keys = new Set([...Object.keys(b), ...Object.keys(a)]);
   return [...keys].filter((k) => JSON.stringify(b[k]) !== JSON.stringify(a[k])).sort();
@@ -52,14 +57,23 @@ function Change({ entry }: { entry: AuditEntry }) {
 /** The asset's audit log: who changed what and when, with the values before and after. */
 export function AuditLog({ assetId }: { assetId: string }) {
   const [entity, setEntity] = useState('');
-  const log = useAuditLog(assetId, { entity: entity || undefined, limit: 200 });
+  const [limit, setLimit] = useState(PAGE);
+  const log = useAuditLog(assetId, { entity: entity || undefined, limit });
   return (
     <Flex direction="column" gap="3">
       <Flex gap="2" align="center">
         <label htmlFor="audit-entity" className="zp-inline-label">
           Show
         </label>
-        <select id="audit-entity" className="native-select" value={entity} onChange={(e) => setEntity(e.currentTarget.value)}>
+        <select
+          id="audit-entity"
+          className="native-select"
+          value={entity}
+          onChange={(e) => {
+            setEntity(e.currentTarget.value);
+            setLimit(PAGE);
+          }}
+        >
           {ENTITIES.map((e) => (
             <option key={e} value={e}>
               {e ? e.replace(/_/g, ' ') : 'every change'}
@@ -109,7 +123,7 @@ export function AuditLog({ assetId }: { assetId: string }) {
                   <Table.Cell>
                     <Text size="1">
                       {e.entity.replace(/_/g, ' ')}
-                      {e.entityId ? <span className="mono"> {e.entityId.slice(0, 8)}</span> : null}
+                      {e.entityId ? <span className="mono"> {String(e.entityId).slice(0, 8)}</span> : null}
                     </Text>
                   </Table.Cell>
                   <Table.Cell>
@@ -121,6 +135,11 @@ export function AuditLog({ assetId }: { assetId: string }) {
           </Table.Body>
         </Table.Root>
       )}
+      {log.data && log.data.length >= limit && limit < 1000 ? (
+        <Button variant="soft" color="gray" onClick={() => setLimit((l) => Math.min(1000, l + 100))} loading={log.isFetching}>
+          Show older entries
+        </Button>
+      ) : null}
     </Flex>
   );
 }

@@ -14,7 +14,7 @@ function version(n: number, status: ReviewStatus, comment: string | null = null)
     inputs: {},
     summaries: [],
     warnings: [],
-    createdBy: 'u1',
+    createdBy: { id: 'u1', name: 'Petra Field' },
     submittedAt: status === 'draft' ? null : '2026-11-30T10:00:00Z',
     reviewedAt: null,
     reviewedBy: null,

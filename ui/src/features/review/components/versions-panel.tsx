@@ -17,8 +17,7 @@ export interface VersionsPanelProps {
 }
 
 function who(v: InterpretationDto['reviewedBy']): string {
-  if (!v) return '';
-  return typeof v === 'string' ? '' : v.name;
+  return v?.name ?? '';
 }
 
 /**

@@ -43,7 +43,7 @@ export function CurveCheckPanel({ depthUnit, rows, bindings, runNames, canEdit, 
   const initial = useMemo(() => Object.fromEntries(bindings.map((b) => [b.binding, `${b.logRunId}::${b.mnemonic}`])), [bindings]);
   const [choice, setChoice] = useState<Record<string, string>>(initial);
   useEffect(() => setChoice(initial), [initial]);
-  const options = rows.map((r) => ({ value: `${r.logRunId}::${r.mnemonic}`, label: `${r.mnemonic} (${r.unit || 'no unit'}) · ${runNames[r.logRunId] ?? 'log run'}` }));
+  const options = rows.map((r) => ({ value: `${r.logRunId}::${r.mnemonic}`, label: `${r.mnemonic} (${r.unit || 'no unit'}) · ${r.fileName ?? runNames[r.logRunId] ?? 'log run'}` }));
   const keys = [...BINDING_ORDER, ...bindings.map((b) => b.binding).filter((k) => !BINDING_ORDER.includes(k))];
   const anyProposed = bindings.some((b) => b.proposed && !b.confirmed);
 
@@ -79,7 +79,7 @@ export function CurveCheckPanel({ depthUnit, rows, bindings, runNames, canEdit, 
                       {r.curveClass ? ` · ${r.curveClass}` : ''}
                     </Text>
                     <Text as="div" size="1" color="gray">
-                      {runNames[r.logRunId] ?? ''}
+                      {r.fileName ?? runNames[r.logRunId] ?? ''}
                     </Text>
                   </Table.RowHeaderCell>
                   <Table.Cell>

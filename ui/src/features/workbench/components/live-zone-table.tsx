@@ -12,8 +12,8 @@ export interface LiveZoneTableProps {
 
 /**
  * The well's zone summary, recomputed in the browser as cutoffs move (role table, named
- * "Zone summary"). Averages of net pay: porosity by thickness, Sw by pore volume; Vsh of net
- * reservoir. Thickness in MD, with TVD and TVT columns to choose when the well has a survey.
+ * "Zone summary"). Averages over net pay (as the server's zone tables): porosity and Vsh by
+ * thickness, Sw by pore volume. Thickness in MD, with TVD and TVT columns to choose when the well has a survey.
  */
 export function LiveZoneTable({ summaries, depthUnit, colours, hasSurvey, toolbar }: LiveZoneTableProps) {
   const columns = useMemo(() => zoneColumns(depthUnit, colours, hasSurvey), [depthUnit, colours, hasSurvey]);
@@ -25,7 +25,7 @@ export function LiveZoneTable({ summaries, depthUnit, colours, hasSurvey, toolba
       rowId={(s) => s.zone}
       emptyText="No zones evaluated yet."
       toolbar={toolbar}
-      footnote="Net pay averages: porosity thickness-weighted, Sw pore-volume-weighted; Vsh of net reservoir. Cutoffs inclusive."
+      footnote="Averages over net pay: porosity and Vsh thickness-weighted, Sw pore-volume-weighted. Cutoffs inclusive."
     />
   );
 }
@@ -51,7 +51,7 @@ function zoneColumns(u: string, colours: Readonly<Record<string, string>>, surve
     { id: 'ntg', header: 'N/G', kind: 'number', digits: 3, value: (s) => s.netToGross },
     { id: 'phi', header: 'Porosity', unit: 'v/v', kind: 'number', digits: 3, value: (s) => s.netPay.meanPhi },
     { id: 'sw', header: 'Sw', unit: 'v/v', kind: 'number', digits: 3, value: (s) => s.netPay.meanSw },
-    { id: 'vsh', header: 'Vsh', unit: 'v/v', kind: 'number', digits: 3, value: (s) => s.netReservoir.meanVsh },
+    { id: 'vsh', header: 'Vsh', unit: 'v/v', kind: 'number', digits: 3, value: (s) => s.netPay.meanVsh },
     { id: 'phiH', header: 'Phi-h', unit: u, kind: 'number', digits: 3, value: (s) => s.netPay.phiH.md },
     { id: 'hcpt', header: 'HCPT', unit: u, kind: 'number', digits: 3, value: (s) => s.netPay.hcpt.md },
     { id: 'payToGross', header: 'Pay/gross', kind: 'number', digits: 3, value: (s) => s.payToGross, hiddenByDefault: true },

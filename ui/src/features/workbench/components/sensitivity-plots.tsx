@@ -39,12 +39,14 @@ function SensitivityPlot({ name, s, current, depthUnit }: { name: SweptCutoff; s
   const x = scaleLinear()
     .domain([values[0], values[values.length - 1]])
     .range([0, IW]);
+  // An all-zero series still gets a readable axis (0 to 1).
+  const top = (v: number | undefined) => (v !== undefined && v > 0 ? v * 1.08 : 1);
   const yPay = scaleLinear()
-    .domain([0, Math.max(1e-9, max(s.netPay) ?? 0) * 1.08])
+    .domain([0, top(max(s.netPay))])
     .range([IH, 0])
     .nice(4);
   const yPhiH = scaleLinear()
-    .domain([0, Math.max(1e-9, max(s.phiH) ?? 0) * 1.08])
+    .domain([0, top(max(s.phiH))])
     .range([IH, 0])
     .nice(4);
   const k = values.map((_, i) => i);

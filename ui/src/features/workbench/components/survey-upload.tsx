@@ -10,7 +10,7 @@ export interface SurveyUploadProps {
 }
 
 function stationCount(s: SurveyDto): number {
-  return Array.isArray(s.stations) ? s.stations.length : s.stations;
+  return s.stations.length;
 }
 
 /** Deviation survey of the well: a CSV with header md,inclination,azimuth; TVD by minimum curvature. */

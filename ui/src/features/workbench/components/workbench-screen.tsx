@@ -12,7 +12,7 @@ import { useSaveInterpretation } from '../api/save-interpretation';
 import { useSurvey, useUploadSurvey } from '../api/survey';
 import { usePutTops, useTops } from '../api/tops';
 import { useDraftCutoffs } from '../hooks/use-draft-cutoffs';
-import { useLiveEvaluation } from '../hooks/use-live-evaluation';
+import { defaultFormation, useLiveEvaluation, useSensitivity } from '../hooks/use-live-evaluation';
 import { useTopsDraft } from '../hooks/use-tops-draft';
 import { compareSummaries, type SummaryMismatch } from '../utils/live-evaluation';
 import { ConventionsList } from './conventions-list';
@@ -61,8 +61,9 @@ export function WorkbenchScreen({ assetId, wellId, wellName, canEdit, formations
   const cut = useDraftCutoffs(wb?.cutoffs);
   const zoneNames = useMemo(() => (wb ? [...new Set(wb.zones.map((z) => z.name))] : []), [wb]);
   const [chosen, setChosen] = useState<string | null>(null);
-  const selected = chosen && zoneNames.includes(chosen) ? chosen : (zoneNames[0] ?? null);
-  const live = useLiveEvaluation(samples.data, wb, cut.draft, selected);
+  const live = useLiveEvaluation(samples.data, wb, cut.draft);
+  const selected = chosen && zoneNames.includes(chosen) ? chosen : defaultFormation(live.base, zoneNames);
+  const sensitivity = useSensitivity(live, selected);
 
   const tops = useTops(assetId, wellId);
   const putTops = usePutTops(assetId, wellId);
@@ -76,7 +77,7 @@ export function WorkbenchScreen({ assetId, wellId, wellName, canEdit, formations
   const [cursor, setCursor] = useState<number | null>(null);
 
   const zones: DepthViewZone[] = useMemo(
-    () => (wb ? wb.zones.map((z) => ({ name: z.name, formation: z.name, colour: z.colour, top: z.top, base: z.base })) : []),
+    () => (wb ? wb.zones.map((z) => ({ name: z.name, formation: z.formation ?? z.name, colour: z.colour, top: z.top, base: z.base })) : []),
     [wb],
   );
   const colours = useMemo(() => Object.fromEntries(zones.map((z) => [z.formation, z.colour])), [zones]);
@@ -187,6 +188,14 @@ export function WorkbenchScreen({ assetId, wellId, wellName, canEdit, formations
         </Callout.Root>
       ) : null}
 
+      {w.notes?.length ? (
+        <Callout.Root color="gray" size="1">
+          {w.notes.map((n) => (
+            <Callout.Text key={n}>{n}</Callout.Text>
+          ))}
+        </Callout.Root>
+      ) : null}
+
       <div className="wb-grid">
         <div className="wb-grid__view">
           <PanelErrorBoundary title="The depth view">
@@ -241,13 +250,22 @@ export function WorkbenchScreen({ assetId, wellId, wellName, canEdit, formations
                         formation={selected}
                         cutoffs={draftSel}
                         stored={w.cutoffs[selected]}
-                        disabled={!canEdit || locked}
-                        onChange={(field, value) => cut.set(selected, field as keyof Cutoffs, value)}
+                        onChange={(field, value) => {
+                          setChosen(selected);
+                          cut.set(selected, field as keyof Cutoffs, value);
+                        }}
                       />
-                      {cut.changed.length && canEdit ? (
-                        <Text size="1" color="gray">
-                          Cutoffs apply to {selected} in every well of the asset; “Save” stores them and this version.
-                        </Text>
+                      {cut.changed.length ? (
+                        <Flex gap="2" align="center" wrap="wrap">
+                          <Text size="1" color="gray">
+                            {canEdit && !locked
+                              ? `Cutoffs apply to ${selected} in every well of the asset; “Save” stores them and this version.`
+                              : 'A what-if in this browser only: nothing is stored.'}
+                          </Text>
+                          <Button size="1" variant="ghost" color="gray" onClick={cut.reset}>
+                            Back to the stored cutoffs
+                          </Button>
+                        </Flex>
                       ) : null}
                     </>
                   ) : null}
@@ -311,7 +329,7 @@ export function WorkbenchScreen({ assetId, wellId, wellName, canEdit, formations
             />
             <PhiVshPlot phie={live.base.result.curves.PHIE} vsh={live.base.result.curves.VSH} sw={live.base.result.curves.SW} indices={selectedIdx} cutoffs={selCutoffs} />
           </div>
-          {live.sensitivity ? <SensitivityPlots sensitivity={live.sensitivity} cutoffs={selCutoffs} depthUnit={depthUnit} /> : null}
+          {sensitivity ? <SensitivityPlots sensitivity={sensitivity} cutoffs={selCutoffs} depthUnit={depthUnit} /> : null}
         </section>
       ) : null}
 

@@ -24,6 +24,8 @@ export interface ZoneParamsFormProps {
   /** Starting parameters for a lithology (core's defaultZoneParameters). */
   defaultsFor: (lithology: keyof typeof LITHOLOGY_LABELS) => ZoneParametersJson;
   onSave: (params: ZoneParametersJson) => Promise<unknown>;
+  /** The formation's lithology: the first choice of "Defaults for". */
+  lithology?: string;
 }
 
 /**
@@ -31,7 +33,7 @@ export interface ZoneParamsFormProps {
  * permeability. Checked with zod before sending (each message names the field); the server
  * checks again with core and its message is shown as it comes.
  */
-export function ZoneParamsForm({ zoneName, depthUnit, params, isDefault, canEdit, defaultsFor, onSave }: ZoneParamsFormProps) {
+export function ZoneParamsForm({ zoneName, depthUnit, params, isDefault, canEdit, defaultsFor, onSave, lithology: formationLithology }: ZoneParamsFormProps) {
   const form = useForm<ZoneParamsFormValues>({
     resolver: zodResolver(zoneParamsSchema) as never,
     defaultValues: toFormValues(params),
@@ -41,7 +43,9 @@ export function ZoneParamsForm({ zoneName, depthUnit, params, isDefault, canEdit
   const errors = formState.errors;
   const [serverError, setServerError] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
-  const [lithology, setLithology] = useState<keyof typeof LITHOLOGY_LABELS>('sandstone');
+  const [lithology, setLithology] = useState<keyof typeof LITHOLOGY_LABELS>(
+    formationLithology && formationLithology in LITHOLOGY_LABELS ? (formationLithology as keyof typeof LITHOLOGY_LABELS) : 'sandstone',
+  );
   useEffect(() => reset(toFormValues(params)), [params, reset]);
 
   const v = watch();

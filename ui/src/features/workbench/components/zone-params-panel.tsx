@@ -40,12 +40,21 @@ export function ZoneParamsPanel({ assetId, wellId, depthUnit, zones, formations,
           </Text>
         ) : null}
       </Flex>
-      <ZoneParams key={zone.formationId} assetId={assetId} wellId={wellId} zone={zone} depthUnit={depthUnit} canEdit={canEdit} />
+      <ZoneParams key={zone.formationId} assetId={assetId} wellId={wellId} zone={zone} depthUnit={depthUnit} canEdit={canEdit} lithology={lithology} />
     </Flex>
   );
 }
 
-function ZoneParams({ assetId, wellId, zone, depthUnit, canEdit }: { assetId: string; wellId: string; zone: WorkbenchZone; depthUnit: string; canEdit: boolean }) {
+interface ZoneParamsProps {
+  assetId: string;
+  wellId: string;
+  zone: WorkbenchZone;
+  depthUnit: string;
+  canEdit: boolean;
+  lithology?: string;
+}
+
+function ZoneParams({ assetId, wellId, zone, depthUnit, canEdit, lithology }: ZoneParamsProps) {
   const stored = useZoneParameters(assetId, wellId, zone.formationId);
   const put = usePutZoneParameters(assetId, wellId, zone.formationId);
   if (stored.isPending) return <Text color="gray">Loading parameters…</Text>;
@@ -64,6 +73,7 @@ function ZoneParams({ assetId, wellId, zone, depthUnit, canEdit }: { assetId: st
       params={stored.data.params as unknown as ZoneParametersJson}
       isDefault={stored.data.isDefault}
       canEdit={canEdit}
+      lithology={lithology}
       defaultsFor={(lith) => defaultZoneParameters(lith, unit) as unknown as ZoneParametersJson}
       onSave={(params) => put.mutateAsync(params as unknown as Record<string, unknown>)}
     />

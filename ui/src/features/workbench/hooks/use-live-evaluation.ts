@@ -10,7 +10,6 @@ export interface LiveEvaluation {
   /** Why the well cannot be evaluated yet (core's message names zone and field). */
   error: string | null;
   live: ReturnType<typeof applyLiveCutoffs> | null;
-  sensitivity: ReturnType<typeof sensitivityFor>;
   /** The cutoffs the live result was computed with (the latest slider values, at frame rate). */
   appliedCutoffs: Readonly<Record<string, Cutoffs>>;
 }
@@ -23,7 +22,6 @@ export function useLiveEvaluation(
   samples: MergedSamples | undefined,
   workbench: WorkbenchDto | undefined,
   cutoffs: Readonly<Record<string, Cutoffs>>,
-  selectedFormation: string | null,
 ): LiveEvaluation {
   const [base, error] = useMemo<[BaseEvaluation | null, string | null]>(() => {
     if (!samples || !workbench) return [null, null];
@@ -43,13 +41,29 @@ export function useLiveEvaluation(
       return [null, e instanceof Error ? e.message : String(e)] as const;
     }
   }, [base, applied]);
-  const sensitivity = useMemo(() => {
-    if (!base || !selectedFormation || liveError) return null;
+  return { base, error: error ?? liveError, live, appliedCutoffs: applied };
+}
+
+/** Net pay and phi-h against each cutoff of one formation, on the frame-throttled cutoffs. */
+export function useSensitivity(live: LiveEvaluation, formation: string | null) {
+  const { base, appliedCutoffs, error } = live;
+  return useMemo(() => {
+    if (!base || !formation || error) return null;
     try {
-      return sensitivityFor(base, applied, selectedFormation);
+      return sensitivityFor(base, appliedCutoffs, formation);
     } catch {
       return null;
     }
-  }, [base, applied, selectedFormation, liveError]);
-  return { base, error: error ?? liveError, live, sensitivity, appliedCutoffs: applied };
+  }, [base, appliedCutoffs, formation, error]);
+}
+
+/**
+ * The formation to tune first: the one with the most net pay at the stored cutoffs (from the
+ * curves' own evaluation, so it does not jump while sliders move), else the first zone.
+ */
+export function defaultFormation(base: BaseEvaluation | null, names: readonly string[]): string | null {
+  const zones = base?.result.zones ?? [];
+  let best: { name: string; pay: number } | null = null;
+  for (const z of zones) if (!best || z.netPay.thickness.md > best.pay) best = { name: z.formation, pay: z.netPay.thickness.md };
+  return best && best.pay > 0 ? best.name : (names[0] ?? null);
 }

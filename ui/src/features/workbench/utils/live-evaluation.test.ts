@@ -30,7 +30,7 @@ const stored = { 'A Sand': { vshMax: 0.4, phiMin: 0.1, swMax: 0.6, permMin: null
 const workbench: WorkbenchDto = {
   well: { id: 'w1', name: 'Hand-1', uwi: null },
   depthUnit: 'ft',
-  zones: [{ formationId: 'f1', name: 'A Sand', colour: '#d9b26f', top: 999.5, base: 1009.5, params }],
+  zones: [{ formationId: 'f1', name: 'A Sand', formation: 'A Sand', colour: '#d9b26f', top: 999.5, base: 1009.5, params }],
   cutoffs: stored,
   bindings: [],
   survey: null,

@@ -46,16 +46,16 @@ export function toCutoffTable(cutoffs: Readonly<Record<string, Cutoffs>>): Cutof
 export function evaluationZones(workbench: Pick<WorkbenchDto, 'zones'>): EvaluationZone[] {
   return workbench.zones.map((z) => ({
     name: z.name,
-    formation: z.name,
+    formation: z.formation ?? z.name,
     top: z.top,
     base: z.base,
     params: z.params as unknown as ZoneParameters,
   }));
 }
 
+/** The survey exactly as the server passes it to evaluateWell: its stations (md, inc, azi). */
 function surveyInput(survey: WorkbenchDto['survey']): SurveyInput | undefined {
-  if (!survey || survey.md.length < 2) return undefined;
-  return { md: survey.md, tvd: survey.tvd };
+  return survey && survey.stations.length ? survey.stations : undefined;
 }
 
 const key = (k: string) => k.toUpperCase();
@@ -67,7 +67,7 @@ const key = (k: string) => k.toUpperCase();
 export function evaluateBase(samples: MergedSamples, workbench: WorkbenchDto, cutoffs: Readonly<Record<string, Cutoffs>>): BaseEvaluation {
   const curve = (k: string) => samples.curves[key(k)]?.values;
   const zones = evaluationZones(workbench);
-  const unit = workbench.depthUnit === 'm' ? 'm' : 'ft';
+  const unit = (workbench.depthUnit ?? samples.depthUnit) === 'm' ? 'm' : 'ft';
   const result = evaluateWell({
     depth: samples.depth,
     depthUnit: unit,

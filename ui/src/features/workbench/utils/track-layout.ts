@@ -49,20 +49,20 @@ const ALL_TRACKS: TrackSpec[] = [
     title: 'Correlation',
     kind: 'curves',
     scale: 'linear',
-    width: 150,
+    width: 130,
     curves: [
       c('GR', 'GR', 'gAPI', CURVE_COLOURS.gr, [0, 150]),
       c('SP', 'SP', 'mV', CURVE_COLOURS.sp, [-120, 30], '5 3'),
       c('CALI', 'CALI', 'in', CURVE_COLOURS.cali, [6, 16], '2 2'),
     ],
   },
-  { id: 'depth', title: 'Depth', kind: 'depth', scale: 'linear', width: 74, curves: [] },
+  { id: 'depth', title: 'Depth', kind: 'depth', scale: 'linear', width: 62, curves: [] },
   {
     id: 'resistivity',
     title: 'Resistivity',
     kind: 'curves',
     scale: 'log',
-    width: 170,
+    width: 140,
     curves: [
       c('RT', 'RT deep', 'ohm.m', CURVE_COLOURS.rt, [0.2, 2000]),
       c('RM', 'RM medium', 'ohm.m', CURVE_COLOURS.rm, [0.2, 2000], '6 3'),
@@ -74,7 +74,7 @@ const ALL_TRACKS: TrackSpec[] = [
     title: 'Density · neutron · sonic',
     kind: 'curves',
     scale: 'linear',
-    width: 170,
+    width: 150,
     curves: [
       c('RHOB', 'RHOB', 'g/cm3', CURVE_COLOURS.rhob, [1.95, 2.95]),
       c('NPHI', 'NPHI', 'v/v', CURVE_COLOURS.nphi, [0.45, -0.15], '6 3'),
@@ -87,7 +87,7 @@ const ALL_TRACKS: TrackSpec[] = [
     title: 'Shale volume',
     kind: 'curves',
     scale: 'linear',
-    width: 110,
+    width: 90,
     curves: [c('VSH', 'VSH', 'v/v', CURVE_COLOURS.vsh, [0, 1])],
   },
   {
@@ -95,7 +95,7 @@ const ALL_TRACKS: TrackSpec[] = [
     title: 'Porosity',
     kind: 'curves',
     scale: 'linear',
-    width: 120,
+    width: 100,
     curves: [c('PHIT', 'PHIT', 'v/v', CURVE_COLOURS.phit, [0.5, 0], '4 2'), c('PHIE', 'PHIE', 'v/v', CURVE_COLOURS.phie, [0.5, 0])],
   },
   {
@@ -103,7 +103,7 @@ const ALL_TRACKS: TrackSpec[] = [
     title: 'Saturation',
     kind: 'curves',
     scale: 'linear',
-    width: 120,
+    width: 100,
     curves: [c('SW', 'SW', 'v/v', CURVE_COLOURS.sw, [1, 0]), c('BVW', 'BVW', 'v/v', CURVE_COLOURS.bvw, [0.5, 0], '4 2')],
   },
   {
@@ -111,7 +111,7 @@ const ALL_TRACKS: TrackSpec[] = [
     title: 'Net flags',
     kind: 'flags',
     scale: 'linear',
-    width: 84,
+    width: 76,
     curves: [c('NET_RES', 'Net res.', '', CURVE_COLOURS.netReservoir, [0, 1]), c('NET_PAY', 'Net pay', '', CURVE_COLOURS.netPay, [0, 1])],
   },
 ];

@@ -1,15 +1,18 @@
-import { arpsRw, formationTemperature, type ResolvedZoneParameters, type TemperatureModel, type TemperatureUnit } from '@poreline/core';
+import {
+  arpsRw,
+  formationTemperature,
+  minimumCurvature,
+  positionAtMd,
+  type ResolvedZoneParameters,
+  type TemperatureModel,
+  type TemperatureUnit,
+} from '@poreline/core';
 import type { WorkbenchDto, WorkbenchZone } from '../../../types/workbench';
 
-/** TVD at a measured depth from the survey table (linear between stations, as core reads a TVD table), else MD. */
+/** TVD at a measured depth on the survey path (minimum curvature, as the evaluation uses), else MD. */
 export function tvdAt(md: number, survey: WorkbenchDto['survey']): number {
-  if (!survey || survey.md.length < 2) return md;
-  const { md: m, tvd: t } = survey;
-  if (md <= m[0]) return t[0] + (md - m[0]);
-  for (let i = 1; i < m.length; i++) {
-    if (md <= m[i]) return t[i - 1] + ((md - m[i - 1]) / (m[i] - m[i - 1])) * (t[i] - t[i - 1]);
-  }
-  return t[t.length - 1] + (md - m[m.length - 1]);
+  if (!survey || !survey.stations.length) return md;
+  return positionAtMd(minimumCurvature(survey.stations), md).tvd;
 }
 
 /**

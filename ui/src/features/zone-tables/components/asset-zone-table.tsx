@@ -66,7 +66,14 @@ function columns(assetId: string, unit: string, hasTvd: boolean): SummaryColumn<
     n('hcpt', 'HCPT', 3, unit),
   ];
   if (hasTvd) {
-    for (const k of ['grossTvd', 'netPayTvd', 'netPayTvt', 'phiHTvd', 'hcptTvd']) cols.push(n(k, k.replace(/Tvd$/, ' TVD').replace(/Tvt$/, ' TVT'), 2, unit, k !== 'netPayTvd'));
+    const tv: [string, string][] = [
+      ['grossTvd', 'Gross TVD'],
+      ['netPayTvd', 'Net pay TVD'],
+      ['netPayTvt', 'Net pay TVT'],
+      ['phiHTvd', 'Phi-h TVD'],
+      ['hcptTvd', 'HCPT TVD'],
+    ];
+    for (const [k, label] of tv) cols.push(n(k, label, 2, unit, k !== 'netPayTvd'));
   }
   return cols;
 }

@@ -67,7 +67,7 @@ export class BindingsService {
   }
 
   /** Confirms a full set of bindings: each input once, each curve from a run of this well with a unit of the input's kind. */
-  async replace(assetId: string, wellId: string, body: PutBindingsDto, user: AuthUser): Promise<BindingDto[]> {
+  async replace(assetId: string, wellId: string, body: PutBindingsDto, user: Pick<AuthUser, 'id'>): Promise<BindingDto[]> {
     await this.wells.require(assetId, wellId);
     const curves = await this.curvesOf(wellId);
     const seen = new Set<string>();

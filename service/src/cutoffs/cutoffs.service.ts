@@ -46,7 +46,7 @@ export class CutoffsService {
    * returned. The cutoffs, every recomputed version and their audit entries are written in
    * one transaction.
    */
-  async put(assetId: string, formationId: string, body: PutCutoffsDto, user: AuthUser): Promise<CutoffsResultDto> {
+  async put(assetId: string, formationId: string, body: PutCutoffsDto, user: Pick<AuthUser, 'id'>): Promise<CutoffsResultDto> {
     const formation = await this.formations.require(assetId, formationId);
     const cutoffs: FormationCutoffs = { vshMax: body.vshMax, phiMin: body.phiMin, swMax: body.swMax, permMin: body.permMin ?? null };
     const tops = (await this.formationRows.topsOfAsset(assetId)).filter((t) => t.formationId === formation.id);

@@ -16,7 +16,7 @@ export class FormationsService {
     return (await this.formations.list(assetId)).map(toFormationDto);
   }
 
-  async create(assetId: string, body: CreateFormationDto, user: AuthUser): Promise<FormationDto> {
+  async create(assetId: string, body: CreateFormationDto, user: Pick<AuthUser, 'id'>): Promise<FormationDto> {
     const name = body.name.trim();
     await this.refuseDuplicateName(assetId, name);
     const existing = await this.formations.list(assetId);
@@ -28,7 +28,7 @@ export class FormationsService {
     return toFormationDto(row);
   }
 
-  async update(assetId: string, formationId: string, body: UpdateFormationDto, user: AuthUser): Promise<FormationDto> {
+  async update(assetId: string, formationId: string, body: UpdateFormationDto, user: Pick<AuthUser, 'id'>): Promise<FormationDto> {
     const formation = await this.require(assetId, formationId);
     const name = body.name?.trim();
     if (name !== undefined && name.toLowerCase() !== formation.name.toLowerCase()) await this.refuseDuplicateName(assetId, name);

@@ -81,7 +81,7 @@ export class InterpretationsService {
   }
 
   /** PUT on a version: only the newest draft or returned version can be saved again; approved and submitted ones are immutable (409). */
-  async saveVersion(assetId: string, wellId: string, id: string, user: AuthUser): Promise<InterpretationDto> {
+  async saveVersion(assetId: string, wellId: string, id: string, user: Pick<AuthUser, 'id'>): Promise<InterpretationDto> {
     const row = await this.require(assetId, wellId, id);
     if (row.status === 'approved') throw new ConflictException(`Version ${row.version} is approved and immutable; Save starts version ${row.version + 1} as a draft.`);
     if (row.status === 'submitted') throw new ConflictException(`Version ${row.version} is waiting for review and cannot change until a reviewer approves or returns it.`);

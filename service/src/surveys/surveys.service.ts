@@ -44,7 +44,7 @@ export class SurveysService {
   }
 
   /** Parses, checks and stores a survey CSV (replacing any earlier one); 400 naming the line on bad input. */
-  async upload(assetId: string, wellId: string, file: UploadedSurveyFile | undefined, form: SurveyUploadDto, user: AuthUser): Promise<SurveyDto> {
+  async upload(assetId: string, wellId: string, file: UploadedSurveyFile | undefined, form: SurveyUploadDto, user: Pick<AuthUser, 'id'>): Promise<SurveyDto> {
     const well = await this.wells.require(assetId, wellId);
     if (!file) throw new BadRequestException('file is missing: send the survey CSV in the form field "file".');
     const fileName = Buffer.from(file.originalname, 'latin1').toString('utf8');

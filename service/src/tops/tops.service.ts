@@ -29,7 +29,7 @@ export class TopsService {
   }
 
   /** Replaces the well's tops: each formation of this asset at most once, deepening in formation order. */
-  async replace(assetId: string, wellId: string, body: PutTopsDto, user: AuthUser): Promise<TopDto[]> {
+  async replace(assetId: string, wellId: string, body: PutTopsDto, user: Pick<AuthUser, 'id'>): Promise<TopDto[]> {
     await this.wells.require(assetId, wellId);
     const formations = await this.formations.list(assetId);
     const byId = new Map(formations.map((f) => [f.id, f]));

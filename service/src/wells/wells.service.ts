@@ -44,7 +44,7 @@ export class WellsService {
   }
 
   /** Changes the well's identity, location, elevations or depth reference; audited with before and after. */
-  async update(assetId: string, wellId: string, body: UpdateWellDto, user: AuthUser): Promise<WellRowDto> {
+  async update(assetId: string, wellId: string, body: UpdateWellDto, user: Pick<AuthUser, 'id'>): Promise<WellRowDto> {
     const well = await this.require(assetId, wellId);
     const name = body.name?.trim();
     if (name !== undefined && name !== well.name && (await this.wells.findByName(assetId, name))) throw new ConflictException(`A well named "${name}" already exists in this asset.`);

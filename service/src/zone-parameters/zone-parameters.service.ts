@@ -33,7 +33,7 @@ export class ZoneParametersService {
    * Stores a zone's parameters after core's validation: every field present, none unknown,
    * each value in range. 400 lists every issue, each naming the zone and the field.
    */
-  async put(assetId: string, wellId: string, formationId: string, body: PutZoneParametersDto, user: AuthUser): Promise<ZoneParametersDto> {
+  async put(assetId: string, wellId: string, formationId: string, body: PutZoneParametersDto, user: Pick<AuthUser, 'id'>): Promise<ZoneParametersDto> {
     const well = await this.wells.require(assetId, wellId);
     const formation = await this.formations.require(assetId, formationId);
     const zone = `zone '${formation.name}'`;

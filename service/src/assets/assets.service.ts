@@ -15,13 +15,13 @@ export class AssetsService {
   async list(user: AuthUser): Promise<AssetDto[]> {
     const memberships = await this.users.memberships(user);
     const rows = await Promise.all(memberships.map((m) => this.assets.findById(m.assetId)));
-    return memberships.map((m, i) => ({ id: m.assetId, name: m.assetName, description: rows[i]?.description ?? '', role: m.role }));
+    return memberships.map((m, i) => ({ id: m.assetId, name: m.assetName, description: rows[i]?.description ?? '', role: m.role, isDemo: rows[i]?.isDemo ?? false }));
   }
 
   /** Access was checked by AssetAccessGuard; `role` is the caller's. */
   async get(assetId: string, role: MemberRole): Promise<AssetDto> {
     const asset = await this.assets.findById(assetId);
     if (!asset) throw new NotFoundException('No such asset.');
-    return { id: asset.id, name: asset.name, description: asset.description, role };
+    return { id: asset.id, name: asset.name, description: asset.description, role, isDemo: asset.isDemo };
   }
 }

@@ -29,6 +29,8 @@ export interface Asset {
   name: string;
   description: string | null;
   role: Role;
+  /** The invented demo asset (shows the model-vs-evaluated check). */
+  isDemo?: boolean;
 }
 
 export interface LogRun {

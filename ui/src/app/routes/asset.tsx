@@ -7,6 +7,7 @@ import { PanelErrorBoundary } from '../../components/panel-error-boundary';
 import { assetQueryOptions, useAsset } from '../../features/assets/api/get-asset';
 import { useMe } from '../../features/auth/api/get-me';
 import { canEditWells, roleInAsset } from '../../features/auth/utils/permissions';
+import { DemoCheckPanel } from '../../features/demo-check/components/demo-check-panel';
 import { useWells, wellsQueryOptions } from '../../features/wells/api/get-wells';
 import { NewWellForm } from '../../features/wells/components/new-well-form';
 import { WellsTable } from '../../features/wells/components/wells-table';
@@ -79,6 +80,12 @@ export function AssetRoute() {
           )}
         </PanelErrorBoundary>
       </Flex>
+
+      {asset.data.isDemo ? (
+        <PanelErrorBoundary title="The model-vs-evaluated check">
+          <DemoCheckPanel assetId={assetId} />
+        </PanelErrorBoundary>
+      ) : null}
     </Flex>
   );
 }

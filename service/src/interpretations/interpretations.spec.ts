@@ -168,6 +168,25 @@ describe('workbench and interpretations API (real PGlite)', () => {
     await t.http.put(`${base}/zones/${well.kite.id}/parameters`).set('Authorization', petro).send({ params: kite.params }).expect(200);
   });
 
+  it('with a deviation survey the summaries carry TVD thickness; the browser computes the same from the workbench stations', async () => {
+    const dev = await setUpKiteWell(t, assetId, 'KITE-DEV');
+    const devBase = `/api/assets/${assetId}/wells/${dev.wellId}`;
+    // a straight hole inclined 30 degrees from the surface: TVD = MD cos(30 deg) (geometry, by hand)
+    await t.http.post(`${devBase}/survey`).set('Authorization', petro).attach('file', Buffer.from('md,inclination,azimuth\n0,30,90\n6000,30,90\n'), 'dev.csv').expect(201);
+    const saved = await t.http.post(`${devBase}/interpretations`).set('Authorization', petro);
+    expect(saved.status, JSON.stringify(saved.body)).toBe(201);
+    const kite = (saved.body.summaries as ZoneSummary[]).find((s) => s.zone === 'Kite Sand')!;
+    expect(kite.gross.thickness.tvd!).toBeCloseTo(100 * Math.cos(Math.PI / 6), 6);
+    expect(kite.netReservoir.thickness.tvd!).toBeCloseTo(99.75 * Math.cos(Math.PI / 6), 6); // net pay is 0 here: Kite Sand's Sw cutoff is 0.2 since the cutoffs test
+    const wb = (await t.http.get(`${devBase}/workbench`).set('Authorization', petro)).body;
+    expect(wb.survey.stations).toEqual([{ md: 0, inc: 30, azi: 90 }, { md: 6000, inc: 30, azi: 90 }]);
+    const bundle = decodeCurveBundle(new Uint8Array((await t.http.get(`${devBase}/merged-samples`).set('Authorization', petro).buffer(true).parse(binary)).body as Buffer));
+    const curves: WellCurves = {};
+    bundle.entries.slice(1).forEach((e, i) => ((curves as Record<string, Float64Array>)[String(e.binding)] = bundle.values[i + 1]));
+    const local = evaluateWell({ depth: bundle.values[0], depthUnit: wb.depthUnit, curves, zones: wb.zones, cutoffs: wb.cutoffs, survey: wb.survey.stations });
+    expect(JSON.parse(JSON.stringify(local.zones))).toEqual(saved.body.summaries);
+  });
+
   it('audit log: 403 for petrophysicist, engineer and viewer; reviewers and admins see who changed what', async () => {
     for (const role of ['petrophysicist', 'engineer', 'viewer'] as const) {
       expect((await t.http.get(`/api/assets/${assetId}/audit`).set('Authorization', await t.tokenFor(role))).status).toBe(403);

@@ -1,4 +1,3 @@
-import { RESERVES_DISCLAIMER } from '@poreline/core';
 import { Button, Callout, Flex, Heading, Text } from '@radix-ui/themes';
 import { useId, useState } from 'react';
 import type { DeclineCheck } from '../../../types/reserves';
@@ -20,7 +19,10 @@ export interface CrossChecksPanelProps {
   onKeepDecline?: (seriesId: string, check: DeclineCheck) => void;
 }
 
-/** Production cross-checks of the case's wells: p/z (pressure) and Arps decline (rate). */
+/**
+ * Production cross-checks of the case's wells: p/z (pressure) and Arps decline (rate). Shown in
+ * the case page, which carries the caution about volumes above its tabs.
+ */
 export function CrossChecksPanel({ assetId, caseId, caseRevision, wells, canUpload, declineChecks, onKeepDecline }: CrossChecksPanelProps) {
   const id = useId();
   const [wellId, setWellId] = useState(wells[0]?.wellId ?? '');
@@ -33,9 +35,6 @@ export function CrossChecksPanel({ assetId, caseId, caseRevision, wells, canUplo
   const current = list.find((s) => s.id === chosen) ?? list[0];
   return (
     <Flex direction="column" gap="4">
-      <Callout.Root color="amber" variant="surface" size="1" role="note">
-        <Callout.Text>{RESERVES_DISCLAIMER}</Callout.Text>
-      </Callout.Root>
       <Flex gap="3" align="center" wrap="wrap">
         <Text as="label" size="2" weight="medium" htmlFor={`${id}-well`}>
           Well
@@ -58,7 +57,7 @@ export function CrossChecksPanel({ assetId, caseId, caseRevision, wells, canUplo
         {list.length ? (
           <>
             <Text as="label" size="2" weight="medium" htmlFor={`${id}-series`}>
-              Data
+              Production data
             </Text>
             <select id={`${id}-series`} className="native-select" value={current?.id} onChange={(e) => setChosen(e.target.value)}>
               {list.map((s) => (

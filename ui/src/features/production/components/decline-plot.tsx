@@ -9,10 +9,16 @@ const M = { top: 16, right: 20, bottom: 46, left: 62 };
 const IW = W - M.left - M.right;
 const IH = H - M.top - M.bottom;
 
-/** Rate against time: the data, the fitted Arps curve and its forecast to the economic limit. */
+/**
+ * Rate against time: the data, the fitted Arps curve and its forecast toward the economic limit
+ * (drawn at most 30 years past the last point; the EUR table gives the time to the limit).
+ */
 export function DeclinePlot({ fit }: { fit: DeclineFitDto }) {
   const years = (d: number) => d / 365.25;
-  const tMax = Math.max(max(fit.forecast, (p) => p.tDays) ?? 0, max(fit.points, (p) => p.tDays) ?? 0);
+  const tLast = max(fit.points, (p) => p.tDays) ?? 0;
+  // Show the forecast to the limit, but at most 30 years past the data (a long tail would squeeze the fit).
+  const tMax = Math.max(tLast, Math.min(max(fit.forecast, (p) => p.tDays) ?? 0, tLast + 30 * 365.25));
+  const shown = fit.forecast.filter((p) => p.tDays <= tMax + 1e-9);
   const x = scaleLinear().domain([0, years(tMax) || 1]).range([0, IW]).nice(6);
   const y = scaleLinear()
     .domain([0, Math.max(fit.qi, max(fit.points, (p) => p.rate) ?? 0) * 1.06])
@@ -20,8 +26,8 @@ export function DeclinePlot({ fit }: { fit: DeclineFitDto }) {
     .nice(5);
   const path = (pts: { tDays: number; rate: number }[]) => pts.map((p, i) => `${i ? 'L' : 'M'}${x(years(p.tDays)).toFixed(2)},${y(p.rate).toFixed(2)}`).join('');
   const lastData = fit.points[fit.points.length - 1]?.tDays ?? 0;
-  const fitted = fit.forecast.filter((p) => p.tDays <= lastData);
-  const ahead = fit.forecast.filter((p) => p.tDays >= lastData);
+  const fitted = shown.filter((p) => p.tDays <= lastData);
+  const ahead = shown.filter((p) => p.tDays >= lastData);
   return (
     <svg role="img" aria-label={`Rate against time with the ${fit.kind} Arps fit; EUR ${sig(fit.eur)} ${fit.volumeUnit}`} width={W} height={H} viewBox={`0 0 ${W} ${H}`} className="rc-plot">
       <g transform={`translate(${M.left},${M.top})`}>

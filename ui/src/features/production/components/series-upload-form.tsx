@@ -72,7 +72,7 @@ export function SeriesUploadForm({ assetId, wellId, wellName, onStored }: { asse
         <Flex gap="3" wrap="wrap" align="end">
           <Flex direction="column" gap="1">
             <Text as="label" size="2" weight="medium" htmlFor={`${id}-kind`}>
-              Data
+              Kind of data
             </Text>
             <select id={`${id}-kind`} className="native-select" {...register('kind')}>
               <option value="pressure">Static pressure vs cumulative gas</option>

@@ -180,7 +180,7 @@ export function CaseInputsForm({ assetId, reservesCase: c, editable, onRan }: Ca
             <input id={`${id}-trials`} className="number-input" inputMode="numeric" disabled={disabled} {...register('trials')} />
           </Field>
           <Field label="Seed" htmlFor={`${id}-seed`} error={errors.seed} hint="Stored with the case: the same seed gives the same run.">
-            <input id={`${id}-seed`} className="number-input" inputMode="numeric" disabled={disabled} {...register('seed')} />
+            <input id={`${id}-seed`} className="number-input rc-wide-input" inputMode="numeric" disabled={disabled} {...register('seed')} />
           </Field>
         </div>
         {v.fluid === 'gas' ? (

@@ -7,22 +7,21 @@ import { INPUT_ORDER } from '../utils/inputs-form';
 import { inputLabel, inputUnit } from '../utils/labels';
 import { ExceedancePlot } from './exceedance-plot';
 import { HistogramPlot } from './histogram-plot';
-import { ReservesCaution } from './reserves-caution';
 import { TornadoPlot } from './tornado-plot';
 
 const exact = new Intl.NumberFormat('en', { maximumFractionDigits: 0 });
 
-/** Deterministic and probabilistic volumes of the case's last run, with plots and the tornado. */
+/**
+ * Deterministic and probabilistic volumes of the case's last run, with plots and the tornado.
+ * Shown inside the case page, which carries the caution about volumes above its tabs.
+ */
 export function ResultsPanel({ reservesCase: c }: { reservesCase: ReservesCase }) {
   const id = useId();
   const [output, setOutput] = useState<'recoverable' | 'inPlace'>('recoverable');
   const r = c.results;
   if (!r) {
     return (
-      <Flex direction="column" gap="3">
-        <ReservesCaution text={c.caution} />
-        <Text color="gray">Not run on the current inputs yet. Fill the inputs and press Run.</Text>
-      </Flex>
+      <Text color="gray">Not run on the current inputs yet. Fill the inputs and press Run.</Text>
     );
   }
   const fluid = r.fluid;
@@ -32,7 +31,6 @@ export function ResultsPanel({ reservesCase: c }: { reservesCase: ReservesCase }
   const stem = `${c.name}-${output}`;
   return (
     <Flex direction="column" gap="4">
-      <ReservesCaution text={c.caution} />
       {!c.resultsCurrent ? (
         <Callout.Root color="orange" size="1">
           <Callout.Text>These results belong to revision {r.revision}; the case has changed since. Run it again.</Callout.Text>

@@ -1,12 +1,13 @@
 import type { ZoneSummary } from '@poreline/core';
 import { Badge, Button, Callout, Card, Flex, Heading, Spinner, Tabs, Text } from '@radix-ui/themes';
-import { useMemo, useRef, useState, type ReactNode } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
+import { useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { PanelErrorBoundary } from '../../../components/panel-error-boundary';
 import { exportPng, exportSvg, fileStem } from '../../../lib/svg-export';
 import type { Cutoffs, FormationDto, InterpretationDto } from '../../../types/workbench';
 import { usePutBindings, useBindings } from '../api/bindings';
 import { useCurveCheck } from '../api/curve-check';
-import { useMergedSamples } from '../api/get-merged-samples';
+import { mergedSamplesQueryOptions, useMergedSamples } from '../api/get-merged-samples';
 import { useWorkbench } from '../api/get-workbench';
 import { useSaveInterpretation } from '../api/save-interpretation';
 import { useSurvey, useUploadSurvey } from '../api/survey';
@@ -57,6 +58,15 @@ export function WorkbenchScreen({ assetId, wellId, wellName, canEdit, formations
   const samples = useMergedSamples(assetId, wellId);
   const wb = workbench.data;
   const depthUnit = wb?.depthUnit ?? samples.data?.depthUnit ?? '';
+
+  // The samples are kept for the session; if the server's merged index no longer matches them
+  // (a LAS file loaded elsewhere since), fetch them again.
+  const queryClient = useQueryClient();
+  const stale =
+    !!wb?.merged && !!samples.data && (wb.merged.samples !== samples.data.depth.length || Math.abs(wb.merged.start - samples.data.depth[0]) > 1e-9);
+  useEffect(() => {
+    if (stale) void queryClient.invalidateQueries({ queryKey: mergedSamplesQueryOptions(assetId, wellId).queryKey });
+  }, [stale, queryClient, assetId, wellId]);
 
   const cut = useDraftCutoffs(wb?.cutoffs);
   const zoneNames = useMemo(() => (wb ? [...new Set(wb.zones.map((z) => z.name))] : []), [wb]);

@@ -8,7 +8,7 @@ import { ZoneParamsForm } from './zone-params-form';
 const sand = defaultZoneParameters('sandstone', 'ft') as unknown as ZoneParametersJson;
 const defaultsFor = (l: 'sandstone' | 'shaly_sand' | 'limestone' | 'dolomite') => defaultZoneParameters(l, 'ft') as unknown as ZoneParametersJson;
 
-function form(onSave = vi.fn(async () => undefined), canEdit = true) {
+function form(onSave = vi.fn(async (_params: ZoneParametersJson) => undefined as unknown), canEdit = true) {
   renderWithProviders(
     <ZoneParamsForm zoneName="Wren Sand" depthUnit="ft" params={sand} isDefault={false} canEdit={canEdit} defaultsFor={defaultsFor} onSave={onSave} lithology="sandstone" />,
   );

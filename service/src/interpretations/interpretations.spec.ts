@@ -206,6 +206,7 @@ describe('workbench and interpretations API (real PGlite)', () => {
     expect((await t.http.post(`/api/assets/${outsider.assetId}/wells/${well.wellId}/interpretations`).set('Authorization', outsider.token)).status).toBe(404);
     const empty = await t.http.post(`/api/assets/${outsider.assetId}/wells/${outsider.wellId}/interpretations`).set('Authorization', outsider.token);
     expect(empty.status).toBe(400); // no logs: nothing to evaluate
+    expect((await t.http.get(`/api/assets/${outsider.assetId}/wells/${outsider.wellId}/merged-samples`).set('Authorization', outsider.token)).status).toBe(409); // nothing bound
     expect(empty.body.message).toMatch(/Nothing to evaluate/);
   });
 });

@@ -195,7 +195,8 @@ describe('reserves cases: sources, overrides, runs, review and export', () => {
   it('Monte Carlo with distributions: P90 < P50 < P10, 100,000 trials, same seed same numbers', async () => {
     const distributions = {
       area: { kind: 'triangular', min: 480, mode: 640, max: 900 },
-      porosity: { kind: 'normal', mean: 0.2, sd: 0.02, truncate: { min: 0.12, max: 0.28 } },
+      // truncated to the physical range [0, 1]: far-tail bounds are pulled in to 8 SD (distribution-tails.ts)
+      porosity: { kind: 'normal', mean: 0.2, sd: 0.02, truncate: { min: 0, max: 1 } },
       sw: { kind: 'uniform', min: 0.2, max: 0.32 },
       recoveryFactor: { kind: 'lognormal', p90: 0.2, p10: 0.4, truncate: { max: 0.6 } },
     };
@@ -217,6 +218,7 @@ describe('reserves cases: sources, overrides, runs, review and export', () => {
     expect(ln.mean).toBeGreaterThan(0);
     expect(run1.body.results.probabilistic.recoverable.histogram.counts.reduce((a: number, b: number) => a + b, 0)).toBe(100_000);
     expect(run1.body.results.probabilistic.recoverable.tornado.rows[0].swing).toBeGreaterThan(0);
+    expect(run1.body.results.notes.join(' ')).toMatch(/pulled in to 8 SD for sampling \(porosity\)/);
     const run2 = await t.http.post(`${base()}/${caseId}/run`).set('Authorization', await t.tokenFor('engineer'));
     expect(run2.body.results.probabilistic.recoverable.p50).toBe(r.p50);
     expect(run2.body.results.probabilistic.inPlace.mean).toBe(run1.body.results.probabilistic.inPlace.mean);

@@ -85,6 +85,13 @@ export function ResultsPanel({ reservesCase: c }: { reservesCase: ReservesCase }
           <Text size="2" color="gray">
             P90 is the low estimate: the value exceeded with 90 % probability (SPE-PRMS). P10 is the high estimate. Run took {r.probabilistic.elapsedMs} ms.
           </Text>
+          {r.notes
+            .filter((n) => n.startsWith('Truncation bounds'))
+            .map((n) => (
+              <Text key={n} size="1" color="gray">
+                {n}
+              </Text>
+            ))}
           <Table.Root variant="surface" size="1">
             <caption className="visually-hidden">Probabilistic volumes</caption>
             <Table.Header>

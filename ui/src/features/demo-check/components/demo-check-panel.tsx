@@ -73,8 +73,8 @@ function ZoneTable({ name, rows }: { name: string; rows: readonly DemoZoneRow[] 
         <Table.Body>
           {lines.map((l) => (
             <Table.Row key={l.key}>
-              <Table.RowHeaderCell>{l.well}</Table.RowHeaderCell>
-              <Table.Cell>{l.zone}</Table.Cell>
+              <Table.RowHeaderCell className="nowrap">{l.well}</Table.RowHeaderCell>
+              <Table.Cell className="nowrap">{l.zone}</Table.Cell>
               <Table.Cell style={numeric}>
                 <Pair row={l.rows['net reservoir']} digits={1} />
               </Table.Cell>

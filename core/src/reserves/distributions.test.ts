@@ -119,3 +119,15 @@ describe('sampleDistribution (inversion of seeded uniforms)', () => {
     expect(() => sampleDistribution({ kind: 'beta' } as unknown as Distribution, U)).toThrow(/distribution\.kind/);
   });
 });
+
+describe('truncation bounds far out in a tail', () => {
+  it('distributionQuantile of N(0.2, 0.02) truncated to [0, 1] stays finite and inside the bounds', () => {
+    // 1 is 40 sd above the mean: F(1) rounds to 1 in double precision, so the untruncated
+    // inverse at p = 1 is infinite; the truncated distribution ends at 1.
+    const d = { kind: 'normal', mean: 0.2, sd: 0.02, truncate: { min: 0, max: 1 } } as const;
+    expect(distributionQuantile(d, 1)).toBe(1);
+    expect(distributionQuantile(d, 0)).toBeGreaterThanOrEqual(0);
+    // Median unchanged by bounds 10 and 40 sd away: mean of a symmetric normal (exact).
+    expect(distributionQuantile(d, 0.5)).toBeCloseTo(0.2, 9);
+  });
+});

@@ -106,6 +106,9 @@ interface Prepared {
   /** probability range kept by truncation */
   pLo: number;
   pHi: number;
+  /** truncation bounds in value space (-Infinity / Infinity when none) */
+  xLo?: number;
+  xHi?: number;
 }
 
 function fail(fn: string, field: string, msg: string): never {
@@ -197,12 +200,21 @@ function prepare(d: Distribution, fn: string, field: string): Prepared {
     if (!(hi > lo)) fail(fn, `${field}.truncate.max`, `must be > truncate.min (got ${lo}, ${hi})`);
     p.pLo = lo === -Infinity ? 0 : cdf(p, lo);
     p.pHi = hi === Infinity ? 1 : cdf(p, hi);
+    p.xLo = lo;
+    p.xHi = hi;
     if (!(p.pHi - p.pLo > 1e-12)) fail(fn, `${field}.truncate`, 'leaves no probability in range');
   }
   return p;
 }
 
 function quantileOf(d: Prepared, p: number, fast: boolean): number {
+  const x = unclampedQuantile(d, p, fast);
+  // A bound far out in a tail has F(bound) rounding to 0 or 1, so the inverse there is
+  // infinite; the truncated distribution's quantile never leaves [xLo, xHi].
+  return d.xLo === undefined ? x : Math.min(d.xHi!, Math.max(d.xLo, x));
+}
+
+function unclampedQuantile(d: Prepared, p: number, fast: boolean): number {
   const q = d.pLo + p * (d.pHi - d.pLo);
   switch (d.kind) {
     case 'fixed':
@@ -298,6 +310,11 @@ export function sampleDistribution(
     case 'lognormal':
       for (let i = 0; i < n; i++) out[i] = Math.exp(pd.a + pd.b * normalQuantileFast(lo + (uniforms[i] + half) * span));
       break;
+  }
+  if (pd.xLo !== undefined && (pd.kind === 'normal' || pd.kind === 'lognormal')) {
+    const xLo = pd.xLo;
+    const xHi = pd.xHi!;
+    for (let i = 0; i < n; i++) out[i] = Math.min(xHi, Math.max(xLo, out[i]));
   }
   return out;
 }

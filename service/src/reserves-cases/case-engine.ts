@@ -19,7 +19,6 @@ import {
   type WellPayInput,
 } from '@poreline/core';
 import { INPUT_NAMES, type CaseInputs, type InputName, type Overridable, type WellOverridable } from './case-inputs.js';
-import { TAIL_LIMIT_SD, tightenFarTails } from './distribution-tails.js';
 import type { SourceSnapshot } from './source-values.js';
 
 /**
@@ -239,13 +238,7 @@ export function runCase(sources: readonly SourceSnapshot[], inputs: CaseInputs, 
   if (inputs.fluid === 'gas' && !inputs.gas) messages.push('inputs.gas (reservoir pressure, temperature, gas gravity, z method) is required for a gas case');
   if (inputs.fluid === 'gas' && inputs.distributions.bo) messages.push('inputs.distributions.bo: a gas case has no Bo; its Bg comes from the gas PVT');
   if (messages.length) throw new CaseInputError(messages);
-  const distributions: CaseInputs['distributions'] = {};
-  const tightened: string[] = [];
-  for (const [k, d] of Object.entries(inputs.distributions) as [InputName, Distribution][]) {
-    const t = tightenFarTails(d);
-    distributions[k] = t.distribution;
-    if (t.tightened) tightened.push(k);
-  }
+  const distributions: CaseInputs['distributions'] = { ...inputs.distributions };
   let r: ReservesCaseResult;
   try {
     r = evaluateReservesCase({
@@ -303,9 +296,7 @@ export function runCase(sources: readonly SourceSnapshot[], inputs: CaseInputs, 
       recoverable: outputStats(p.recoverable),
       elapsedMs: Math.round(performance.now() - started),
     },
-    notes: tightened.length
-      ? [...r.notes, `Truncation bounds more than ${TAIL_LIMIT_SD} SD out were pulled in to ${TAIL_LIMIT_SD} SD for sampling (${tightened.join(', ')}); the probability left out is below 1.3e-15.`]
-      : r.notes,
+    notes: r.notes,
     conventions: caseConventions(inputs),
   };
 }

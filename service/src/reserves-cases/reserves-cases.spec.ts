@@ -195,7 +195,7 @@ describe('reserves cases: sources, overrides, runs, review and export', () => {
   it('Monte Carlo with distributions: P90 < P50 < P10, 100,000 trials, same seed same numbers', async () => {
     const distributions = {
       area: { kind: 'triangular', min: 480, mode: 640, max: 900 },
-      // truncated to the physical range [0, 1]: far-tail bounds are pulled in to 8 SD (distribution-tails.ts)
+      // truncated to the physical range [0, 1]: bounds 10 and 40 sd out (core keeps quantiles inside them)
       porosity: { kind: 'normal', mean: 0.2, sd: 0.02, truncate: { min: 0, max: 1 } },
       sw: { kind: 'uniform', min: 0.2, max: 0.32 },
       recoveryFactor: { kind: 'lognormal', p90: 0.2, p10: 0.4, truncate: { max: 0.6 } },

@@ -4,7 +4,8 @@ import { fileURLToPath } from 'node:url';
 /**
  * Sets up a workbench well through the API, from the committed Wrenmoor demo data
  * (demo-wells/data): the well, its LAS file, the field's formations (created when the asset
- * lacks them), its tops from tops.csv, and confirmed curve bindings.
+ * lacks them), its tops from tops.csv, the seeded well's zone parameters (when the demo seed
+ * loaded it) and confirmed curve bindings.
  */
 
 const demoData = (path: string) => fileURLToPath(new URL(`../../demo-wells/data/${path}`, import.meta.url));
@@ -73,6 +74,14 @@ export async function setUpDemoWell(baseUrl: string, token: string, wellName: st
     .filter((c) => c[0] === demoWell)
     .map((c) => ({ formationId: formations.find((f) => f.name === c[1])!.id, md: Number(c[2]), source: 'table' }));
   await api(baseUrl, token, 'PUT', `/assets/${asset.id}/wells/${well.id}/tops`, { tops });
+  // The seeded demo well's zone parameters, when the seed has it, so the copy evaluates the same way.
+  const seeded = (await api<Named[]>(baseUrl, token, 'GET', `/assets/${asset.id}/wells`)).find((w) => w.name === demoWell);
+  if (seeded) {
+    for (const t of tops) {
+      const p = await api<{ params: unknown; isDefault: boolean }>(baseUrl, token, 'GET', `/assets/${asset.id}/wells/${seeded.id}/zones/${t.formationId}/parameters`);
+      if (!p.isDefault) await api(baseUrl, token, 'PUT', `/assets/${asset.id}/wells/${well.id}/zones/${t.formationId}/parameters`, { params: p.params });
+    }
+  }
   const bindings = await api<{ binding: string; logRunId: string; mnemonic: string }[]>(baseUrl, token, 'GET', `/assets/${asset.id}/wells/${well.id}/bindings`);
   await api(baseUrl, token, 'PUT', `/assets/${asset.id}/wells/${well.id}/bindings`, {
     bindings: bindings.map((b) => ({ binding: b.binding, logRunId: b.logRunId, mnemonic: b.mnemonic })),

@@ -15,11 +15,12 @@ describe('well workbench in Chromium: tune, save, submit, approve, export', () =
   let workbenchUrl = '';
   let assetId = '';
   let tunedNetPay = NaN;
+  const wellName = `WB-${Date.now().toString(36)}`;
 
   beforeAll(async () => {
     browser = await launchChromium();
     const token = await login(baseUrl, 'petro@poreline.demo', 'petro-demo-2026');
-    const ids = await setUpDemoWell(baseUrl, token, `WB-${Date.now().toString(36)}`);
+    const ids = await setUpDemoWell(baseUrl, token, wellName);
     assetId = ids.assetId;
     workbenchUrl = `${baseUrl}/assets/${ids.assetId}/wells/${ids.wellId}/workbench`;
   });
@@ -42,7 +43,7 @@ describe('well workbench in Chromium: tune, save, submit, approve, export', () =
       .getByRole('cell')
       .nth(4); // Zone, Top, Gross, Net res., Net pay
 
-  it('the petrophysicist moves the Sw max slider and the flags and zone table follow, then saves and the server agrees', async () => {
+  it('the petrophysicist moves the porosity min slider and the flags and zone table follow, then saves and the server agrees', async () => {
     const page = await openAs('petro@poreline.demo', 'petro-demo-2026');
     await page.getByRole('combobox', { name: 'Formation', exact: true }).selectOption('Wren Sand');
     const before = Number(await netPayCell(page, 'Wren Sand').textContent());
@@ -62,10 +63,13 @@ describe('well workbench in Chromium: tune, save, submit, approve, export', () =
     expect(png.readUInt32BE(16)).toBeGreaterThan(1000); // width: twice the on-screen size
     expect(svgFile.suggestedFilename()).toMatch(/depth-view\.svg$/);
 
-    await page.getByRole('slider', { name: 'Sw max' }).fill('0.12');
+    // Wren Sand: upper sand about 0.245 porosity, lower sand about 0.215 (demo-wells model):
+    // a porosity min of 0.235 keeps most of the upper sand only.
+    await page.getByRole('slider', { name: 'Porosity min' }).fill('0.235');
     await expect.poll(async () => Number(await netPayCell(page, 'Wren Sand').textContent()), { timeout: 10_000 }).toBeLessThan(before);
     expect(await page.locator('path[data-curve="NET_PAY"]').getAttribute('d')).not.toBe(flagsBefore);
     tunedNetPay = Number(await netPayCell(page, 'Wren Sand').textContent());
+    expect(tunedNetPay).toBeGreaterThan(0);
     // The live figure of the tuned formation shows the same net pay.
     expect(await page.getByRole('group', { name: 'Live figures of Wren Sand' }).textContent()).toContain(`${tunedNetPay.toFixed(2)} ft`);
     await screenshot(page, 'workbench-tuning');
@@ -75,8 +79,9 @@ describe('well workbench in Chromium: tune, save, submit, approve, export', () =
     await check.waitFor({ timeout: 60_000 });
     expect(await check.getAttribute('data-server-check')).toBe('match');
     expect(await check.textContent()).toContain('equals the browser’s');
-    // After the save the stored cutoff is the tuned one: the slider keeps 0.12 and nothing is unsaved.
-    expect(await page.getByRole('slider', { name: 'Sw max' }).inputValue()).toBe('0.12');
+    // After the save the stored cutoff is the tuned one: the slider keeps its value and nothing is unsaved.
+    expect(await page.getByRole('slider', { name: 'Porosity min' }).inputValue()).toBe('0.235');
+    expect(await page.getByText(/unsaved cutoffs/).count()).toBe(0);
     expect(Number(await netPayCell(page, 'Wren Sand').textContent())).toBeCloseTo(tunedNetPay, 2);
 
     await page.getByRole('tab', { name: 'Versions' }).click();
@@ -92,7 +97,7 @@ describe('well workbench in Chromium: tune, save, submit, approve, export', () =
     await page.locator('[data-status="approved"]').first().waitFor();
     await screenshot(page, 'workbench-approved');
 
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: /^Export CSV/ }).first().click()]);
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export CSV', exact: true }).click()]);
     const csv = readFileSync(await download.path(), 'utf8');
     // Provenance lines start with '#'; then the header row (units in brackets) and one row per zone.
     const rows = parseCsv(csv).filter((r) => !r[0]?.startsWith('#'));
@@ -104,6 +109,31 @@ describe('well workbench in Chromium: tune, save, submit, approve, export', () =
     expect(Number(wren![payCol])).toBeCloseTo(tunedNetPay, 2);
     expect(csv).toMatch(/approved/);
     await page.context().close();
+  });
+
+  it('the asset zone table shows the approved version for Wren Sand and exports it as CSV', async () => {
+    const context = await browser.newContext({ viewport: { width: 1400, height: 900 }, acceptDownloads: true });
+    const page = await context.newPage();
+    await signIn(page, baseUrl, 'viewer@poreline.demo', 'viewer-demo-2026');
+    await page.goto(`${baseUrl}/assets/${assetId}/zone-table`);
+    await page.getByRole('combobox', { name: 'Formation' }).selectOption({ label: 'Wren Sand' });
+    const table = page.getByRole('table', { name: 'Zone summary across wells' });
+    const row = table.getByRole('row').filter({ hasText: wellName });
+    await row.waitFor();
+    expect(await row.textContent()).toContain('approved');
+    const headers = await table.getByRole('columnheader').allTextContents();
+    const cells = await row.getByRole('cell').allTextContents();
+    const payAt = headers.findIndex((h) => /^Net pay\s*ft/.test(h));
+    expect(Number(cells[payAt]), `net pay in ${JSON.stringify({ headers, cells })}`).toBeCloseTo(tunedNetPay, 2);
+    await screenshot(page, 'workbench-zone-table');
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export CSV', exact: true }).click()]);
+    const rows = parseCsv(readFileSync(await download.path(), 'utf8')).filter((r) => !r[0]?.startsWith('#'));
+    // Wells of the asset log in ft and m, so the header says "(depth unit)" and each row names its unit.
+    const payCol = rows[0].findIndex((h) => h.startsWith('Net pay MD ('));
+    const ours = rows.find((r) => r.includes(wellName) && r.includes('Wren Sand'));
+    expect(ours, `a row of ${wellName} in the zone table CSV`).toBeTruthy();
+    expect(Number(ours![payCol])).toBeCloseTo(tunedNetPay, 2);
+    await context.close();
   });
 
   it('the reviewer sees the save, submit and approve in the audit log', async () => {

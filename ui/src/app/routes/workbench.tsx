@@ -107,7 +107,7 @@ export function WorkbenchRoute() {
                 wellId={wellId}
                 role={role}
                 versionActions={(v) => (
-                  <InterpretationExports assetId={assetId} wellId={wellId} wellName={w.name} interpretationId={v.id} version={v.version} formats={['csv', 'xlsx', 'las']} />
+                  <InterpretationExports assetId={assetId} wellId={wellId} wellName={w.name} interpretationId={v.id} version={v.version} naming="per-version" />
                 )}
               />
             }

@@ -11,6 +11,11 @@ export interface InterpretationExportsProps {
   version: number;
   /** Which files to offer (default all three). */
   formats?: InterpretationFormat[];
+  /**
+   * 'plain': buttons named "Export CSV", "Export XLSX", "Export LAS" (the latest version, once on
+   * the page); 'per-version': short "CSV"... buttons named "Version 3 as CSV" (rows of a version list).
+   */
+  naming?: 'plain' | 'per-version';
 }
 
 const LABEL: Record<InterpretationFormat, string> = { csv: 'Export CSV', xlsx: 'Export XLSX', las: 'Export LAS' };
@@ -19,7 +24,7 @@ const LABEL: Record<InterpretationFormat, string> = { csv: 'Export CSV', xlsx: '
  * Files of one stored version, made by the server: the zone table as CSV or XLSX (units in the
  * header row, provenance block) and the computed curves as LAS 2.0.
  */
-export function InterpretationExports({ assetId, wellId, wellName, interpretationId, version, formats = ['csv', 'xlsx', 'las'] }: InterpretationExportsProps) {
+export function InterpretationExports({ assetId, wellId, wellName, interpretationId, version, formats = ['csv', 'xlsx', 'las'], naming = 'plain' }: InterpretationExportsProps) {
   const download = useDownload();
   return (
     <Flex direction="column" gap="1">
@@ -30,12 +35,12 @@ export function InterpretationExports({ assetId, wellId, wellName, interpretatio
             size="1"
             variant="soft"
             loading={download.busy === f}
-            aria-label={`${LABEL[f]} of version ${version}`}
+            aria-label={naming === 'per-version' ? `Version ${version} as ${f.toUpperCase()}` : undefined}
             onClick={() =>
               download.run(f, () => exportInterpretation(assetId, wellId, interpretationId, f), `${fileStem(wellName)}-v${version}.${f}`, MIME[f])
             }
           >
-            {LABEL[f]}
+            {naming === 'per-version' ? f.toUpperCase() : LABEL[f]}
           </Button>
         ))}
       </Flex>

@@ -17,6 +17,7 @@ import { ProductionModule } from './production/production.module.js';
 import { ReservesCasesModule } from './reserves-cases/reserves-cases.module.js';
 import { SeedModule } from './seed/seed.module.js';
 import { SetupModule } from './setup/setup.module.js';
+import { UsersModule } from './users/users.module.js';
 import { WellsModule } from './wells/wells.module.js';
 import { WORKBENCH_MODULES } from './workbench/workbench-modules.js';
 
@@ -39,6 +40,7 @@ export class AppModule {
         ReservesCasesModule,
         HealthModule,
         SetupModule,
+        UsersModule,
         SeedModule,
         DemoCheckModule,
         ...WORKBENCH_MODULES,

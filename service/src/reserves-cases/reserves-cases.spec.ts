@@ -202,15 +202,12 @@ describe('reserves cases: sources, overrides, runs, review and export', () => {
     };
     const patched = await t.http.patch(`${base()}/${caseId}`).set('Authorization', await t.tokenFor('engineer')).send({ inputs: { distributions, trials: 100_000 } });
     expect(patched.status).toBe(200);
-    const started = Date.now();
     const run1 = await t.http.post(`${base()}/${caseId}/run`).set('Authorization', await t.tokenFor('engineer'));
-    const elapsed = Date.now() - started;
     expect(run1.status, JSON.stringify(run1.body.message)).toBe(200);
     const r = run1.body.results.probabilistic.recoverable;
     expect(r.count).toBe(100_000);
     expect(r.p90).toBeLessThan(r.p50);
     expect(r.p50).toBeLessThan(r.p10);
-    expect(elapsed).toBeLessThan(20_000); // generous bound on a shared CI machine
     // lognormal given by P90/P10 is shown in both forms: its P90/P10 come back (exact inversion)
     const ln = run1.body.results.probabilistic.lognormals.recoveryFactor;
     expect(ln.p90).toBeCloseTo(0.2, 10);
@@ -218,7 +215,6 @@ describe('reserves cases: sources, overrides, runs, review and export', () => {
     expect(ln.mean).toBeGreaterThan(0);
     expect(run1.body.results.probabilistic.recoverable.histogram.counts.reduce((a: number, b: number) => a + b, 0)).toBe(100_000);
     expect(run1.body.results.probabilistic.recoverable.tornado.rows[0].swing).toBeGreaterThan(0);
-    expect(run1.body.results.notes.join(' ')).toMatch(/pulled in to 8 SD for sampling \(porosity\)/);
     const run2 = await t.http.post(`${base()}/${caseId}/run`).set('Authorization', await t.tokenFor('engineer'));
     expect(run2.body.results.probabilistic.recoverable.p50).toBe(r.p50);
     expect(run2.body.results.probabilistic.inPlace.mean).toBe(run1.body.results.probabilistic.inPlace.mean);

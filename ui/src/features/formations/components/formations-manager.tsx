@@ -138,7 +138,11 @@ function FormationRow({ assetId, formation: f, canEdit, first, last, onMove, onR
   };
   const identityChanged = name !== f.name || colour !== f.colour || lithology !== f.lithology;
   const c = parsed();
-  const cutoffsChanged = typeof c !== 'string' && JSON.stringify(c) !== JSON.stringify({ vshMax: f.cutoffs.vshMax, phiMin: f.cutoffs.phiMin, swMax: f.cutoffs.swMax, permMin: f.cutoffs.permMin ?? null });
+  const stored = cutoffText(f.cutoffs);
+  // Typed text differs from the stored cutoffs (valid or not: Save then says what is wrong).
+  const cutoffsEdited = (Object.keys(stored) as (keyof Cutoffs)[]).some((k) => text[k].trim() !== stored[k]);
+  const cutoffsChanged =
+    typeof c !== 'string' && JSON.stringify(c) !== JSON.stringify({ vshMax: f.cutoffs.vshMax, phiMin: f.cutoffs.phiMin, swMax: f.cutoffs.swMax, permMin: f.cutoffs.permMin ?? null });
 
   const save = async () => {
     setError(null);
@@ -217,7 +221,7 @@ function FormationRow({ assetId, formation: f, canEdit, first, last, onMove, onR
       <Table.Cell>{cutoffInput('permMin', 'Permeability min')}</Table.Cell>
       {canEdit ? (
         <Table.Cell>
-          <Button size="1" onClick={save} disabled={!identityChanged && !cutoffsChanged} loading={update.isPending || putCutoffs.isPending} aria-label={`Save ${f.name}`}>
+          <Button size="1" onClick={save} disabled={!identityChanged && !cutoffsEdited} loading={update.isPending || putCutoffs.isPending} aria-label={`Save ${f.name}`}>
             Save
           </Button>
         </Table.Cell>

@@ -28,12 +28,17 @@ export interface FormationDto {
 export interface RecomputedWell {
   wellId: string;
   wellName: string;
-  interpretationId: string;
-  version: number;
-  status: ReviewStatus;
+  /** Null when the well has the formation but no saved version yet. */
+  interpretationId: string | null;
+  version: number | null;
+  status: ReviewStatus | null;
   netPayBefore: number | null;
   netPayAfter: number | null;
   changed: boolean;
+  /** The version was recomputed with the new cutoffs (draft or returned). */
+  recomputed?: boolean;
+  /** Why it could not be recomputed. */
+  error?: string;
 }
 
 export interface CutoffsUpdateResult {

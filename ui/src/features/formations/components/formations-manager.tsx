@@ -260,8 +260,17 @@ function RecomputedList({ formation, rows }: { formation: string; rows: Recomput
           ? 'No well has an interpretation with this formation yet.'
           : rows.map((r) => (
               <span key={r.wellId} className="recomputed-item">
-                {r.wellName} v{r.version}:{' '}
-                {r.changed ? (
+                {r.wellName}
+                {r.version !== null ? ` v${r.version}` : ''}:{' '}
+                {r.error ? (
+                  <Badge size="1" color="tomato" variant="soft">
+                    not recomputed: {r.error}
+                  </Badge>
+                ) : r.version === null ? (
+                  <Badge size="1" variant="soft" color="gray">
+                    no version yet
+                  </Badge>
+                ) : r.changed || r.recomputed ? (
                   <>
                     net pay {fmt(r.netPayBefore)} → {fmt(r.netPayAfter)}
                   </>

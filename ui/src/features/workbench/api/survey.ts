@@ -14,10 +14,14 @@ export async function getSurvey(assetId: string, wellId: string, signal?: AbortS
   }
 }
 
-/** POST .../survey, multipart field `file`: a CSV with header md,inclination,azimuth. */
-export function uploadSurvey(assetId: string, wellId: string, file: File): Promise<SurveyDto> {
+/**
+ * POST .../survey, multipart field `file`: a CSV with header md, inclination (inc, incl), azimuth
+ * (azi, az). `depthUnit` says the unit of md when the header does not (else the well's log unit).
+ */
+export function uploadSurvey(assetId: string, wellId: string, file: File, depthUnit?: 'ft' | 'm'): Promise<SurveyDto> {
   const form = new FormData();
   form.append('file', file, file.name);
+  if (depthUnit) form.append('depthUnit', depthUnit);
   return apiUpload<SurveyDto>(`${wellPath(assetId, wellId)}/survey`, form);
 }
 
@@ -35,7 +39,7 @@ export function useSurvey(assetId: string, wellId: string) {
 export function useUploadSurvey(assetId: string, wellId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (file: File) => uploadSurvey(assetId, wellId, file),
+    mutationFn: ({ file, depthUnit }: { file: File; depthUnit?: 'ft' | 'm' }) => uploadSurvey(assetId, wellId, file, depthUnit),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: wellScope(assetId, wellId) }),
   });
 }

@@ -1,4 +1,5 @@
 import { Callout, Flex, Heading, Text } from '@radix-ui/themes';
+import { useState } from 'react';
 import type { SurveyDto } from '../../../types/workbench';
 
 export interface SurveyUploadProps {
@@ -6,7 +7,7 @@ export interface SurveyUploadProps {
   canEdit: boolean;
   uploading: boolean;
   error: string | null;
-  onFile: (file: File) => void;
+  onFile: (file: File, depthUnit?: 'ft' | 'm') => void;
 }
 
 function stationCount(s: SurveyDto): number {
@@ -15,6 +16,7 @@ function stationCount(s: SurveyDto): number {
 
 /** Deviation survey of the well: a CSV with header md,inclination,azimuth; TVD by minimum curvature. */
 export function SurveyUpload({ survey, canEdit, uploading, error, onFile }: SurveyUploadProps) {
+  const [unit, setUnit] = useState<'' | 'ft' | 'm'>('');
   const last = survey?.tvdAtStations?.length ? survey.tvdAtStations[survey.tvdAtStations.length - 1] : null;
   return (
     <section aria-labelledby="survey-heading">
@@ -33,6 +35,18 @@ export function SurveyUpload({ survey, canEdit, uploading, error, onFile }: Surv
           </Text>
         )}
         {canEdit ? (
+          <Flex gap="2" align="center">
+            <label htmlFor="survey-unit" className="zp-inline-label">
+              Unit of md
+            </label>
+            <select id="survey-unit" className="native-select" value={unit} onChange={(e) => setUnit(e.currentTarget.value as '' | 'ft' | 'm')}>
+              <option value="">from the header, else the logs’ unit</option>
+              <option value="ft">ft</option>
+              <option value="m">m</option>
+            </select>
+          </Flex>
+        ) : null}
+        {canEdit ? (
           <label className="file-pick">
             <span>{survey ? 'Replace the survey (CSV)' : 'Upload a survey (CSV)'}</span>
             <input
@@ -42,12 +56,12 @@ export function SurveyUpload({ survey, canEdit, uploading, error, onFile }: Surv
               disabled={uploading}
               onChange={(e) => {
                 const file = e.currentTarget.files?.[0];
-                if (file) onFile(file);
+                if (file) onFile(file, unit || undefined);
                 e.currentTarget.value = '';
               }}
             />
             <Text size="1" color="gray">
-              header: md,inclination,azimuth (degrees)
+              header: md, inclination (or inc), azimuth (or azi), in degrees; md may name its unit, e.g. “md (m)”
             </Text>
           </label>
         ) : null}

@@ -310,6 +310,25 @@ export function WorkbenchScreen({ assetId, wellId, wellName, canEdit, formations
           Zone summary <Text size="2" color="gray" weight="regular">(live, recomputed in the browser)</Text>
         </Heading>
         <LiveZoneTable summaries={summaries} depthUnit={depthUnit} colours={colours} hasSurvey={!!w.survey} />
+        {live.base?.result.warnings.length ? (
+          <details className="conventions" style={{ marginTop: 8 }}>
+            <summary>
+              <Text size="2" weight="medium">
+                Evaluation warnings ({live.base.result.warnings.length})
+              </Text>
+            </summary>
+            <ul className="plain-list" aria-label="Evaluation warnings">
+              {live.base.result.warnings.map((wn, i) => (
+                <li key={i}>
+                  <Text size="2">
+                    {wn.zone ? <strong>{wn.zone}: </strong> : null}
+                    {wn.message}
+                  </Text>
+                </li>
+              ))}
+            </ul>
+          </details>
+        ) : null}
       </section>
 
       {selected && selCutoffs && live.base ? (
@@ -408,7 +427,7 @@ function CurvesTab({ assetId, wellId, depthUnit, runNames, canEdit }: { assetId:
         canEdit={canEdit}
         uploading={upload.isPending}
         error={upload.isError ? upload.error.message : null}
-        onFile={(f) => upload.mutate(f)}
+        onFile={(file, depthUnit) => upload.mutate({ file, depthUnit })}
       />
     </Flex>
   );

@@ -3,10 +3,11 @@ import { apiBinary } from '../../../lib/api-client';
 export type TableFormat = 'csv' | 'xlsx';
 export type InterpretationFormat = 'csv' | 'xlsx' | 'las';
 
-/** GET /assets/:assetId/zone-table/export?format=&formationId= : the file's bytes. */
-export function exportZoneTable(assetId: string, format: TableFormat, formationId: string | null): Promise<ArrayBuffer> {
+/** GET /assets/:assetId/zone-table/export?format=&formationId=&approvedOnly= : the file's bytes. */
+export function exportZoneTable(assetId: string, format: TableFormat, formationId: string | null, approvedOnly = false): Promise<ArrayBuffer> {
   const q = new URLSearchParams({ format });
   if (formationId) q.set('formationId', formationId);
+  if (approvedOnly) q.set('approvedOnly', 'true');
   return apiBinary(`/assets/${encodeURIComponent(assetId)}/zone-table/export?${q}`);
 }
 

@@ -84,14 +84,15 @@ function columns(assetId: string, unit: string, hasTvd: boolean): SummaryColumn<
  */
 export function AssetZoneTable({ assetId, assetName, formations }: AssetZoneTableProps) {
   const [formationId, setFormationId] = useState<string>('');
-  const table = useZoneTable(assetId, formationId || null);
+  const [approvedOnly, setApprovedOnly] = useState(false);
+  const table = useZoneTable(assetId, formationId || null, approvedOnly);
   const download = useDownload();
   const rows = table.data ?? [];
   const unit = rows[0]?.depthUnit ?? '';
   const hasTvd = rows.some((r) => typeof r.netPayTvd === 'number');
   const cols = useMemo(() => columns(assetId, unit, hasTvd), [assetId, unit, hasTvd]);
   const formationName = formations.find((f) => f.id === formationId)?.name;
-  const stem = fileStem(`${assetName}-${formationName ?? 'all-formations'}-zones`);
+  const stem = fileStem(`${assetName}-${formationName ?? 'all-formations'}-zones${approvedOnly ? '-approved' : ''}`);
 
   return (
     <Flex direction="column" gap="3">
@@ -107,6 +108,9 @@ export function AssetZoneTable({ assetId, assetName, formations }: AssetZoneTabl
             </option>
           ))}
         </select>
+        <label className="zp-check">
+          <input type="checkbox" checked={approvedOnly} onChange={(e) => setApprovedOnly(e.currentTarget.checked)} /> Approved versions only
+        </label>
       </Flex>
       {table.isError ? (
         <Callout.Root color="tomato" role="alert">
@@ -125,20 +129,24 @@ export function AssetZoneTable({ assetId, assetName, formations }: AssetZoneTabl
               <Button
                 variant="soft"
                 loading={download.busy === 'csv'}
-                onClick={() => download.run('csv', () => exportZoneTable(assetId, 'csv', formationId || null), `${stem}.csv`, MIME.csv)}
+                onClick={() => download.run('csv', () => exportZoneTable(assetId, 'csv', formationId || null, approvedOnly), `${stem}.csv`, MIME.csv)}
               >
                 Export CSV
               </Button>
               <Button
                 variant="soft"
                 loading={download.busy === 'xlsx'}
-                onClick={() => download.run('xlsx', () => exportZoneTable(assetId, 'xlsx', formationId || null), `${stem}.xlsx`, MIME.xlsx)}
+                onClick={() => download.run('xlsx', () => exportZoneTable(assetId, 'xlsx', formationId || null, approvedOnly), `${stem}.xlsx`, MIME.xlsx)}
               >
                 Export XLSX
               </Button>
             </>
           }
-          footnote="Latest version of each well; draft and returned numbers may still change. Averages: porosity by thickness, Sw by pore volume."
+          footnote={
+            approvedOnly
+              ? 'Newest approved version of each well. Averages over net pay: porosity and Vsh by thickness, Sw by pore volume.'
+              : 'Newest version of each well; draft and returned numbers may still change. Averages over net pay: porosity and Vsh by thickness, Sw by pore volume.'
+          }
         />
       )}
       {download.error ? (

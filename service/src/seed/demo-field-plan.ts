@@ -68,10 +68,10 @@ export function demoWellPlan(): DemoWellPlan[] {
 }
 
 /**
- * WM-4 was logged in two runs. A curve binding takes one run, so the seed binds WM-4 to its
- * second run, which covers the reservoir section (Marrow Shale thin sand, Wren Sand and
- * below); the Greyling Shale and Fenna Sand, logged by the first run only, are then outside
- * the evaluated interval of WM-4 (the workbench says so in its notes).
+ * WM-4 was logged in two runs. The seed binds WM-4 to its second run, which covers the
+ * reservoir section (Marrow Shale thin sand, Wren Sand and below); above it the merge splices
+ * in the same curves from the first run (Greyling Shale, Fenna Sand), and each merged curve
+ * names the runs it took samples from.
  */
 export const BINDING_RUN_FILE: Readonly<Record<string, string>> = { 'WM-4': 'WM-4_run2.las' };
 
@@ -87,7 +87,7 @@ export const REVIEW_PLAN: Readonly<Record<string, DemoReviewPlan>> = {
   'WM-1': { status: 'approved', comment: `${APPROVED} Fenna gas pay agrees with the production test.` },
   'WM-2': { status: 'approved', comment: APPROVED },
   'WM-3': { status: 'approved', comment: `${APPROVED} NPHI null run in the Greyling Shale does not touch a reservoir zone.` },
-  'WM-4': { status: 'approved', comment: `${APPROVED} Evaluated on run 2 (the reservoir section); the Fenna Sand is outside it.` },
+  'WM-4': { status: 'approved', comment: `${APPROVED} Run 2 (the reservoir section) spliced with run 1 above it.` },
   'WM-5': { status: 'approved', comment: `${APPROVED} Metric well: thicknesses read in metres.` },
   'WM-6': { status: 'returned', comment: 'The caliper shows a washout in the Pellow Shale: mark the bad-hole interval and check its density porosity before resubmitting.' },
   'WM-7': { status: 'approved', comment: `${APPROVED} Deviated well: TVD thickness from the survey checked.` },

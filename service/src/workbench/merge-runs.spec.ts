@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { MAX_MERGED_SAMPLES, mergeRuns, resampleNearest, runStep } from './merge-runs.js';
+import { MAX_MERGED_SAMPLES, mergeRuns, resampleNearest, runStep, spliceOutside } from './merge-runs.js';
 
 // Expected values below are worked by hand from the definitions in merge-runs.ts.
 describe('runStep', () => {
@@ -59,5 +59,24 @@ describe('mergeRuns', () => {
   it('refuses an empty input list and an index larger than MAX_MERGED_SAMPLES', () => {
     expect(() => mergeRuns([])).toThrow(/mergeRuns: inputs must not be empty/);
     expect(() => mergeRuns([{ depth: [0, 1e-3], values: [1, 2] }, { depth: [0, MAX_MERGED_SAMPLES], values: [1, 2] }])).toThrow(/more than/);
+  });
+});
+
+describe('spliceOutside', () => {
+  it('fills only depths outside the primary interval, from the first fallback that has a value', () => {
+    const depth = [0, 1, 2, 3, 4];
+    const primary = [NaN, 5, NaN, 6, NaN]; // logged 1..3, null run at 2
+    const r = spliceOutside(depth, primary, 1, 3, [
+      [NaN, 8, 8, 8, NaN],
+      [7, 7, 7, 7, 7],
+    ]);
+    expect(Array.from(r.values)).toEqual([7, 5, NaN, 6, 7]);
+    expect(r.used).toEqual([0, 2]);
+  });
+
+  it('does not change the primary array', () => {
+    const primary = new Float64Array([NaN, 1]);
+    spliceOutside([0, 1], primary, 1, 1, [[2, 2]]);
+    expect(Number.isNaN(primary[0])).toBe(true);
   });
 });

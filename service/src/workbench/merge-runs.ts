@@ -107,3 +107,36 @@ export function mergeRuns(inputs: readonly MergeInput[]): MergedCurves {
   const values = inputs.map((c, i) => resampleNearest(c.depth, c.values, depth, (Math.max(steps[i], step) / 2) * (1 + 1e-9)));
   return { depth, step, values };
 }
+
+/**
+ * Splices a bound curve with the same kind of curve from other runs: where the primary run
+ * has no sample because the depth lies outside its logged interval [primaryTop, primaryBase],
+ * the first fallback (in the order given) with a value there supplies it. Null runs inside
+ * the primary interval stay null (they are the primary run's own gaps, shown in the curve
+ * check). Returns the spliced curve and, per fallback, how many samples it supplied.
+ *
+ * @example spliceOutside([0,1,2,3], [NaN, 5, 6, NaN], 1, 2, [[9, 9, 9, 9]]) // values [9, 5, 6, 9], used [2]
+ */
+export function spliceOutside(
+  depth: Float64Array | readonly number[],
+  primary: Float64Array | readonly number[],
+  primaryTop: number,
+  primaryBase: number,
+  fallbacks: readonly (Float64Array | readonly number[])[],
+): { values: Float64Array; used: number[] } {
+  const values = Float64Array.from(primary);
+  const used = fallbacks.map(() => 0);
+  for (let i = 0; i < depth.length; i++) {
+    const d = depth[i];
+    if (!Number.isNaN(values[i]) || (d >= primaryTop && d <= primaryBase)) continue;
+    for (let f = 0; f < fallbacks.length; f++) {
+      const v = fallbacks[f][i];
+      if (!Number.isNaN(v)) {
+        values[i] = v;
+        used[f]++;
+        break;
+      }
+    }
+  }
+  return { values, used };
+}

@@ -27,3 +27,12 @@ describe('parseSurveyCsv', () => {
     expect(() => parseSurveyCsv('')).toThrow(/the file is empty/);
   });
 });
+
+describe('parseSurveyCsv unit suffixes', () => {
+  it('reads md_ft / inclination_deg / azimuth_deg headers (the demo field survey format) with the unit from the md header', () => {
+    const r = parseSurveyCsv('md_ft,inclination_deg,azimuth_deg\n0,0,40\n1000,12.5,40\n');
+    expect(r.headerUnit).toBe('ft');
+    expect(r.stations[1]).toEqual({ md: 1000, inclination: 12.5, azimuth: 40 });
+    expect(parseSurveyCsv('md_m,inc_deg,azi_deg\n0,0,0\n300,5,10\n').headerUnit).toBe('m');
+  });
+});

@@ -24,6 +24,8 @@ export class SurveyCsvError extends Error {
   }
 }
 
+const UNIT_SUFFIX = /_(ft|feet|m|metres|meters|deg|degrees)$/;
+
 const COLUMNS = {
   md: ['md', 'measured depth', 'measured_depth', 'depth'],
   inclination: ['inclination', 'inc', 'incl'],
@@ -32,7 +34,8 @@ const COLUMNS = {
 
 /**
  * Reads a deviation survey CSV: a header naming md, inclination and azimuth (any order,
- * other columns ignored; a unit may follow in brackets, "md (ft)"), then one station a line.
+ * other columns ignored; a unit may follow in brackets, "md (ft)", or as a suffix, "md_ft",
+ * "inclination_deg"), then one station a line.
  * Angles in degrees: inclination in [0, 180], azimuth in [0, 360]. MD strictly increasing,
  * at least two stations. Comma, semicolon or tab separated. Blank lines are skipped.
  *
@@ -45,13 +48,15 @@ export function parseSurveyCsv(text: string): ParsedSurvey {
   const headerIndex = rows.findIndex((r) => r.some((c) => c.trim() !== ''));
   if (headerIndex < 0) throw new SurveyCsvError('the file is empty: expected a header md,inclination,azimuth and one station a line', null);
   const header = rows[headerIndex].map((c) => c.trim().toLowerCase());
-  const bare = header.map((h) => h.replace(/\s*[([].*[)\]]\s*$/, ''));
+  // A unit may follow a name in brackets ("md (ft)") or as a suffix ("md_ft", "inclination_deg").
+  const unitOf = (h: string) => /[([]\s*([^)\]]+?)\s*[)\]]\s*$/.exec(h)?.[1] ?? UNIT_SUFFIX.exec(h)?.[1];
+  const bare = header.map((h) => h.replace(/\s*[([].*[)\]]\s*$/, '').replace(UNIT_SUFFIX, ''));
   const col = (name: keyof typeof COLUMNS) => bare.findIndex((h) => (COLUMNS[name] as readonly string[]).includes(h));
   const idx = { md: col('md'), inclination: col('inclination'), azimuth: col('azimuth') };
   for (const [name, i] of Object.entries(idx)) {
     if (i < 0) throw new SurveyCsvError(`the header must name an ${name} column (found: ${rows[headerIndex].join(', ')})`, headerIndex + 1);
   }
-  const unitText = /[([]\s*([^)\]]+?)\s*[)\]]/.exec(header[idx.md])?.[1];
+  const unitText = unitOf(header[idx.md]);
   const headerUnit = unitText === undefined ? null : unitText === 'ft' || unitText === 'feet' || unitText === 'f' ? 'ft' : unitText === 'm' || unitText === 'metres' || unitText === 'meters' ? 'm' : undefined;
   if (headerUnit === undefined) throw new SurveyCsvError(`md unit "${unitText}" must be ft or m`, headerIndex + 1);
 

@@ -70,6 +70,8 @@ function stubService(role: Role = 'petrophysicist') {
     switch (key) {
       case 'POST /api/auth/login':
         return jsonResponse(201, { token: 'jwt-1', user: me(role) });
+      case 'GET /api/setup':
+        return jsonResponse(200, { needsFirstAdmin: false });
       case 'GET /api/auth/me':
         return jsonResponse(200, me(role));
       case 'GET /api/assets':
@@ -105,12 +107,13 @@ function renderAt(path: string) {
 describe('routes', () => {
   afterEach(() => vi.unstubAllGlobals());
 
-  it('sends a signed-out user from / to the sign-in page without asking the server anything', async () => {
+  it('sends a signed-out user from / to the sign-in page, asking the server only the public set-up check', async () => {
     const fetchMock = stubService();
     const router = renderAt('/');
     expect(await screen.findByRole('heading', { name: 'Sign in' })).toBeTruthy();
     expect(router.state.location.pathname).toBe('/sign-in');
-    expect(fetchMock).not.toHaveBeenCalled();
+    expect(fetchMock.mock.calls.map(([url]) => url)).toEqual(['/api/setup']);
+    expect(new Headers(fetchMock.mock.calls[0][1]?.headers).has('Authorization')).toBe(false);
   });
 
   it('signs in and lands on the assets list, with the user and role in the shell', async () => {

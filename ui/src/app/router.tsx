@@ -21,6 +21,15 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
       },
     },
     {
+      path: '/setup',
+      HydrateFallback: PageSpinner,
+      ErrorBoundary: RouteError,
+      lazy: async () => {
+        const { SetupRoute, setupLoader } = await import('./routes/setup');
+        return { Component: SetupRoute, loader: setupLoader(queryClient) };
+      },
+    },
+    {
       path: '/',
       Component: AppLayout,
       loader: appLayoutLoader(queryClient),
@@ -92,6 +101,13 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
               lazy: async () => {
                 const { ReservesCaseRoute, reservesCaseLoader } = await import('./routes/reserves-case');
                 return { Component: ReservesCaseRoute, loader: reservesCaseLoader(queryClient) };
+              },
+            },
+            {
+              path: 'admin',
+              lazy: async () => {
+                const { AdminRoute, adminLoader } = await import('./routes/admin');
+                return { Component: AdminRoute, loader: adminLoader(queryClient) };
               },
             },
             { path: '*', Component: NotFoundRoute },

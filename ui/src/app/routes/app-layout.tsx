@@ -34,6 +34,11 @@ export function AppLayout() {
                 <NavLink to="/assets" className="strong-link" end>
                   Assets
                 </NavLink>
+                {me.data?.isAdmin ? (
+                  <NavLink to="/admin" className="strong-link" style={{ marginLeft: 'var(--space-4)' }}>
+                    Team and assets
+                  </NavLink>
+                ) : null}
               </nav>
             </Flex>
             {me.data ? (

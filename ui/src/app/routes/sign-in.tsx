@@ -1,12 +1,18 @@
 import { Card, Flex, Heading, Text } from '@radix-ui/themes';
 import { redirect, useNavigate, useSearchParams } from 'react-router-dom';
 import { Wordmark } from '../../components/wordmark';
+import { getSetupStatus } from '../../features/auth/api/get-setup-status';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
 import { getToken } from '../../lib/auth-token';
 
-/** A signed-in user has nothing to do here. */
-export function signInLoader() {
-  return getToken() ? redirect('/assets') : null;
+/**
+ * A signed-in user has nothing to do here; a new installation without any account goes to
+ * /setup for its first admin. If the set-up check fails, the sign-in form is shown anyway.
+ */
+export async function signInLoader() {
+  if (getToken()) return redirect('/assets');
+  const status = await getSetupStatus().catch(() => null);
+  return status?.needsFirstAdmin ? redirect('/setup') : null;
 }
 
 /** Only same-site paths are followed after sign-in. */

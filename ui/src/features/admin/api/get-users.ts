@@ -1,0 +1,19 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiJson } from '../../../lib/api-client';
+import type { UserAccount } from '../../../types/admin';
+
+/** GET /api/users: the accounts of the admin's organisation (global admin). */
+export function getUsers(signal?: AbortSignal): Promise<UserAccount[]> {
+  return apiJson<UserAccount[]>('/users', { signal });
+}
+
+export function usersQueryOptions() {
+  return queryOptions({
+    queryKey: ['users'] as const,
+    queryFn: ({ signal }) => getUsers(signal),
+  });
+}
+
+export function useUsers() {
+  return useQuery(usersQueryOptions());
+}

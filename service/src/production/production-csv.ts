@@ -18,12 +18,16 @@ export type RatePoint = { t: number; rate: number; date?: string };
 const PRESSURE_COLUMNS = { cumGas: ['cum_gas', 'cumgas', 'gp', 'cumulative_gas', 'cumulative gas', 'cum gas', 'cumulative'], pressure: ['pressure', 'p', 'static_pressure', 'static pressure', 'pr'] };
 const RATE_COLUMNS = { t: ['t', 'time', 'days', 'day', 'months', 'month', 'years', 'year'], date: ['date'], rate: ['rate', 'q', 'qg', 'qo'] };
 
+/** A unit written as a suffix of a column name: "cum_gas_mmscf", "static_pressure_psia", "oil_stb". */
+const UNIT_SUFFIX = /_(mmscf|bscf|mscf|scf|psia|psig|psi|kpa|mpa|bar|stb|bbl|m3|sm3)$/;
+
 function clean(name: string): string {
   return name
     .replace(/^\uFEFF/, '')
     .replace(/[([].*?[)\]]/g, '')
     .trim()
-    .toLowerCase();
+    .toLowerCase()
+    .replace(UNIT_SUFFIX, '');
 }
 
 interface Rows {
@@ -92,11 +96,19 @@ export function parsePressureCsv(text: string): { points: PressurePoint[]; probl
 
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
 
-/** Rate against time (numeric time, or ISO dates turned into days since the first date). */
-export function parseRateCsv(text: string): { points: RatePoint[]; problems: CsvProblem[]; dated: boolean } {
+/**
+ * Rate against time (numeric time, or ISO dates turned into days since the first date), or
+ * monthly volumes: a `days_on` column and a volume column named for the fluid (`oil`, `gas`,
+ * with or without a unit suffix such as `oil_stb`, `gas_mscf`). Monthly volumes become a rate
+ * per producing day, rate = volume / days_on, at t = producing days before the month plus half
+ * the month's (common practice); months with no producing days are skipped.
+ */
+export function parseRateCsv(text: string, fluid?: 'oil' | 'gas'): { points: RatePoint[]; problems: CsvProblem[]; dated: boolean } {
   const problems: CsvProblem[] = [];
   const rows = readRows(text, problems);
   if (!rows) return { points: [], problems, dated: false };
+  const daysOn = column(rows.header, ['days_on', 'days on', 'producing_days', 'producing days']);
+  if (daysOn >= 0 && column(rows.header, RATE_COLUMNS.rate) < 0) return { ...monthlyVolumes(rows, daysOn, fluid, problems), dated: false };
   const ti = column(rows.header, RATE_COLUMNS.t);
   const di = column(rows.header, RATE_COLUMNS.date);
   const qi = column(rows.header, RATE_COLUMNS.rate);
@@ -129,4 +141,25 @@ export function parseRateCsv(text: string): { points: RatePoint[]; problems: Csv
   }
   if (rows.rows.length < 2) problems.push({ line: null, message: `at least 2 data lines are needed (found ${rows.rows.length})` });
   return { points, problems, dated };
+}
+
+function monthlyVolumes(rows: Rows, daysOn: number, fluid: 'oil' | 'gas' | undefined, problems: CsvProblem[]): { points: RatePoint[]; problems: CsvProblem[] } {
+  const names = fluid ? [fluid, 'volume'] : ['volume', 'oil', 'gas'];
+  const vi = column(rows.header, names);
+  if (vi < 0) {
+    problems.push({ line: rows.headerLine, message: `monthly volumes need a volume column named "${names[0]}" (found: ${rows.header.join(', ')})` });
+    return { points: [], problems };
+  }
+  const points: RatePoint[] = [];
+  let before = 0;
+  for (const { line, cells } of rows.rows) {
+    const days = numberAt(cells, daysOn, line, 'days on', problems);
+    const volume = numberAt(cells, vi, line, rows.header[vi], problems);
+    if (Number.isFinite(days) && (days < 0 || days > 31)) problems.push({ line, message: `days on must be between 0 and 31 (got ${days})` });
+    if (Number.isFinite(volume) && volume < 0) problems.push({ line, message: `${rows.header[vi]} must be >= 0 (got ${volume})` });
+    if (days > 0) points.push({ t: before + days / 2, rate: volume / days });
+    if (Number.isFinite(days)) before += days;
+  }
+  if (points.length < 2) problems.push({ line: null, message: `at least 2 producing months are needed (found ${points.length})` });
+  return { points, problems };
 }

@@ -153,7 +153,7 @@ export class ProductionService implements CaseCrossChecks {
       const units = { cumGas: (body.cumGasUnit ?? 'MMscf') as CumGasUnit, pressure: (body.pressureUnit ?? 'psia') as PressureUnit };
       return this.store(assetId, wellId, { kind: 'pressure', fluid: body.fluid, units, points, fileName: body.label?.trim() || fileName }, user);
     }
-    const { points, problems, dated } = parseRateCsv(text);
+    const { points, problems, dated } = parseRateCsv(text, body.fluid);
     if (problems.length) throw csvError(fileName, problems);
     const units = { time: (dated ? 'day' : (body.timeUnit ?? 'day')) as TimeUnit, rate: (body.rateUnit ?? (body.fluid === 'gas' ? 'Mscf/d' : 'STB/d')) as RateUnit };
     return this.store(assetId, wellId, { kind: 'rate', fluid: body.fluid, units, points: points as unknown as Record<string, number>[], fileName: body.label?.trim() || fileName }, user);

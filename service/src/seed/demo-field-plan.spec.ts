@@ -52,9 +52,9 @@ describe('demo field plan', () => {
     ]);
   });
 
-  it('demoProductionSeries() names the file and column of a value that is not a number', () => {
+  it('demoProductionSeries() names the file, line and field of a value that is not a number', () => {
     expect(() => demoProductionSeries({ wm1Pressures: 'cum_gas_mmscf,static_pressure_psia\nx,1\n', wm1Monthly: '', wm4Monthly: '' })).toThrow(
-      /WM-1_static_pressures.csv column cum_gas_mmscf must be a number/,
+      /WM-1_static_pressures.csv: line 2: cumulative gas must be a number/,
     );
   });
 });

@@ -6,6 +6,7 @@
 import { COMPARTMENTS, FORMATIONS, MODEL_CUTOFFS, modelTruth, WELLS, type Lithology } from '@poreline/demo-wells';
 import { FORMATION_PALETTE } from '../formations/formation-palette.js';
 import type { FormationLithology } from '../formations/lithologies.js';
+import { parsePressureCsv, parseRateCsv } from '../production/production-csv.js';
 
 /** A formation of the demo asset: name, Poreline palette colour, lithology (for its defaults), cutoffs. */
 export interface DemoFormationPlan {
@@ -145,32 +146,10 @@ export interface DemoSeries {
   label: string;
 }
 
-function csvRows(text: string, what: string): Record<string, string>[] {
-  const [head, ...lines] = text.split(/\r?\n/).filter((l) => l.trim() !== '');
-  if (!head) throw new RangeError(`demoProductionSeries: ${what} is empty`);
-  const keys = head.split(',').map((k) => k.trim());
-  return lines.map((l) => Object.fromEntries(l.split(',').map((v, i) => [keys[i], v.trim()])));
-}
-
-function num(row: Record<string, string>, key: string, what: string): number {
-  const v = Number(row[key]);
-  if (!Number.isFinite(v)) throw new RangeError(`demoProductionSeries: ${what} column ${key} must be a number, got "${row[key]}"`);
-  return v;
-}
-
-/**
- * Monthly volumes as rates against producing time: t = producing days before the month plus
- * half the month's producing days, rate = volume / producing days (rate per producing day).
- */
-function monthlyRates(text: string, volumeKey: string, what: string): { t: number; rate: number }[] {
-  let before = 0;
-  return csvRows(text, what).flatMap((r) => {
-    const days = num(r, 'days_on', what);
-    const volume = num(r, volumeKey, what);
-    const t = before + days / 2;
-    before += days;
-    return days > 0 ? [{ t, rate: volume / days }] : [];
-  });
+/** Reads a demo CSV with the same reader as the upload route; a problem is a bug in the demo data. */
+function parsed<T>(what: string, r: { points: T[]; problems: { line: number | null; message: string }[] }): T[] {
+  if (r.problems.length) throw new RangeError(`demoProductionSeries: ${what}: ${r.problems.map((p) => `line ${p.line}: ${p.message}`).join('; ')}`);
+  return r.points;
 }
 
 /**
@@ -178,13 +157,10 @@ function monthlyRates(text: string, volumeKey: string, what: string): { t: numbe
  * WM-1 gas rate (Mscf/d) and WM-4 oil rate (STB/d) from the monthly CSV files.
  */
 export function demoProductionSeries(files: { wm1Pressures: string; wm1Monthly: string; wm4Monthly: string }): DemoSeries[] {
-  const pressures = csvRows(files.wm1Pressures, 'WM-1_static_pressures.csv').map((r) => ({
-    cumGas: num(r, 'cum_gas_mmscf', 'WM-1_static_pressures.csv'),
-    pressure: num(r, 'static_pressure_psia', 'WM-1_static_pressures.csv'),
-  }));
+  const pressures = parsed('WM-1_static_pressures.csv', parsePressureCsv(files.wm1Pressures));
   return [
     { well: 'WM-1', kind: 'pressure', fluid: 'gas', units: { cumGas: 'MMscf', pressure: 'psia' }, points: pressures, label: 'WM-1 static pressure surveys (Fenna Sand)' },
-    { well: 'WM-1', kind: 'rate', fluid: 'gas', units: { time: 'day', rate: 'Mscf/d' }, points: monthlyRates(files.wm1Monthly, 'gas_mscf', 'WM-1_monthly.csv'), label: 'WM-1 monthly gas rate (per producing day)' },
-    { well: 'WM-4', kind: 'rate', fluid: 'oil', units: { time: 'day', rate: 'STB/d' }, points: monthlyRates(files.wm4Monthly, 'oil_stb', 'WM-4_monthly.csv'), label: 'WM-4 monthly oil rate (per producing day)' },
+    { well: 'WM-1', kind: 'rate', fluid: 'gas', units: { time: 'day', rate: 'Mscf/d' }, points: parsed('WM-1_monthly.csv', parseRateCsv(files.wm1Monthly, 'gas')).map(({ t, rate }) => ({ t, rate })), label: 'WM-1 monthly gas rate (per producing day)' },
+    { well: 'WM-4', kind: 'rate', fluid: 'oil', units: { time: 'day', rate: 'STB/d' }, points: parsed('WM-4_monthly.csv', parseRateCsv(files.wm4Monthly, 'oil')).map(({ t, rate }) => ({ t, rate })), label: 'WM-4 monthly oil rate (per producing day)' },
   ];
 }

@@ -6,7 +6,7 @@ export class AuditQueryDto {
   @ApiPropertyOptional({ description: 'Only entries of this entity (formation, formation_cutoffs, well_tops, zone_parameters, curve_bindings, well_survey, interpretation, well, log_run)' })
   @IsOptional()
   @IsString({ message: 'entity must be a string' })
-  @Matches(/^[a-z_]{1,40}$/, { message: 'entity must be a lower-case name like well_tops' })
+  @Matches(/^[a-z][a-z_-]{0,39}$/, { message: 'entity must be a lower-case name like well_tops or reserves-case' })
   entity?: string;
 
   @ApiPropertyOptional({ default: 100, minimum: 1, maximum: 1000 })

@@ -6,7 +6,7 @@ import { useAuditLog } from '../api/audit-log';
 
 const PAGE = 50;
 
-const ENTITIES = ['', 'interpretation', 'formation', 'formation_cutoffs', 'well_tops', 'zone_parameters', 'curve_bindings', 'well_survey', 'well', 'log_run'];
+const ENTITIES = ['', 'interpretation', 'formation', 'formation_cutoffs', 'well_tops', 'zone_parameters', 'curve_bindings', 'well_survey', 'well', 'log_run', 'reserves-case', 'production-series', 'asset', 'asset_member', 'demo-field'];
 
 /** What changed between before and after: the top-level keys whose JSON differs. */
 export function changedKeys(before: unknown, after: unknown): string[] {

@@ -150,6 +150,21 @@ describe('evaluateWell: round trip through the forward forms', () => {
     expect(quick).toEqual(full);
   });
 
+  it('options.output: writing into a previous result\'s arrays gives the same curves, qc and summaries as fresh arrays', () => {
+    const p = sandParams();
+    const inp = input(p);
+    // A first run with different inputs leaves other values (and qc bits) in the arrays.
+    const rhob = (inp.curves.rhob as number[]).map(() => 2.8);
+    const first = evaluateWell({ ...inp, curves: { ...inp.curves, rhob }, zones: [{ name: 'Res', top: 5050, base: 5150, params: p }] });
+    const reused = evaluateWell({ ...inp, options: { output: { ...first.curves, qc: first.qc } } });
+    const fresh = evaluateWell(inp);
+    expect(reused.curves.PHIT).toBe(first.curves.PHIT); // same memory
+    expect(Array.from(reused.curves.PHIE)).toEqual(Array.from(fresh.curves.PHIE));
+    expect(Array.from(reused.curves.NET_PAY)).toEqual(Array.from(fresh.curves.NET_PAY));
+    expect(Array.from(reused.qc)).toEqual(Array.from(fresh.qc));
+    expect(reused.zones).toEqual(fresh.zones);
+  });
+
   it('clamps porosity to [0, phiMax], counts it and warns when more than 5% of a zone is clamped', () => {
     const p = sandParams();
     const inp = input(p);

@@ -62,7 +62,18 @@ export interface EvaluateWellInput {
   cutoffs: CutoffTable;
   /** Optional deviation survey (stations or a TVD table) for TVD/TVT and temperature. */
   survey?: SurveyInput;
-  options?: { /** Compute zone summaries (default true). */ summaries?: boolean };
+  options?: {
+    /** Compute zone summaries (default true). */
+    summaries?: boolean;
+    /**
+     * Arrays to write the computed curves and qc mask into (each of the depth's length),
+     * e.g. the previous result's, so a caller that re-evaluates often (a slider in the
+     * browser) reuses its memory instead of allocating seven new arrays each time. An array
+     * of the wrong length is replaced by a new one. Every sample of a reused array is
+     * overwritten.
+     */
+    output?: Partial<EvaluatedCurves> & { qc?: Uint8Array };
+  };
 }
 
 export interface EvaluationWarning {
@@ -208,10 +219,12 @@ export function evaluateWell(input: EvaluateWellInput): EvaluateWellResult {
   const ranges = zoneRangesUnchecked(depth, zones);
   const anyPerm = zones.some((z) => z.params.permeability !== null);
 
-  const VSH = new Float64Array(n), PHIT = new Float64Array(n), PHIE = new Float64Array(n), SW = new Float64Array(n);
-  const BVW = new Float64Array(n), NET_RES = new Float64Array(n), NET_PAY = new Float64Array(n);
-  const PERM = anyPerm ? new Float64Array(n) : null;
-  const qc = new Uint8Array(n);
+  const reuse = input.options?.output ?? {};
+  const f64 = (a: Float64Array | null | undefined) => (a && a.length === n ? a : new Float64Array(n));
+  const VSH = f64(reuse.VSH), PHIT = f64(reuse.PHIT), PHIE = f64(reuse.PHIE), SW = f64(reuse.SW);
+  const BVW = f64(reuse.BVW), NET_RES = f64(reuse.NET_RES), NET_PAY = f64(reuse.NET_PAY);
+  const PERM = anyPerm ? f64(reuse.PERM) : null;
+  const qc = reuse.qc && reuse.qc.length === n ? reuse.qc.fill(0) : new Uint8Array(n);
   const out: EvaluatedCurves = { VSH, PHIT, PHIE, SW, BVW, PERM, NET_RES, NET_PAY };
   const resolved: ResolvedZoneParameters[] = [];
 

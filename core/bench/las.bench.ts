@@ -136,7 +136,7 @@ function splitParseFloat(text: string): number {
 }
 
 function run(which: Which, path: string, repeat: number, extraFlags: string[] = []): ChildResult {
-  const r = spawnSync(process.execPath, ['--expose-gc', ...extraFlags, '--import', 'tsx', self, '--child', which, path, String(repeat)], {
+  const r = spawnSync(process.execPath, ['--expose-gc', ...extraFlags, self, '--child', which, path, String(repeat)], {
     encoding: 'utf8',
     maxBuffer: 1 << 20,
   });

@@ -15,14 +15,25 @@ type Depth = Float64Array | readonly number[];
 
 /** Issues with a depth index (non-finite, not strictly increasing, fewer than 2 samples). */
 export function depthIssues(depth: Depth): ParameterIssue[] {
-  if (depth.length < 2) return [{ zone: null, field: 'depth', message: 'depth must have at least 2 samples' }];
-  for (let i = 0; i < depth.length; i++) {
-    if (!Number.isFinite(depth[i])) return [{ zone: null, field: 'depth', message: `depth must be finite (sample ${i})` }];
-    if (i > 0 && !(depth[i] > depth[i - 1])) {
-      return [{ zone: null, field: 'depth', message: `depth must increase strictly (sample ${i}: ${depth[i]} after ${depth[i - 1]})` }];
-    }
+  const n = depth.length;
+  if (n < 2) return [{ zone: null, field: 'depth', message: 'depth must have at least 2 samples' }];
+  const i = firstBadDepth(depth);
+  if (i === n) return [];
+  if (!Number.isFinite(depth[i])) return [{ zone: null, field: 'depth', message: `depth must be finite (sample ${i})` }];
+  return [{ zone: null, field: 'depth', message: `depth must increase strictly (sample ${i}: ${depth[i]} after ${depth[i - 1]})` }];
+}
+
+/** Index of the first sample that is not finite or not deeper than the one before (n if none). */
+function firstBadDepth(depth: Depth): number {
+  const n = depth.length;
+  let prev = depth[0];
+  if (!Number.isFinite(prev)) return 0;
+  for (let i = 1; i < n; i++) {
+    const x = depth[i];
+    if (!(x > prev && Number.isFinite(x))) return i;
+    prev = x;
   }
-  return [];
+  return n;
 }
 
 /** Upper (shallower) boundary of sample i's interval. */

@@ -22,12 +22,10 @@ import {
   cutoffCurveIssues,
   cutoffIssues,
   formationOf,
-  payFlag,
-  reservoirFlag,
 } from './cutoffs.js';
 import { type SampleGeometry, type SurveyInput, geometryPositionAt, sampleGeometry } from './sample-geometry.js';
 import { type ZoneRange, depthIssues, zoneBoundsIssues, zoneRangesUnchecked } from './sample-thickness.js';
-import { QC_PHIE_CLAMPED, QC_PHIT_CLAMPED, QC_SW_CLAMPED, QC_VSH_CLIPPED } from './qc.js';
+import { type IntervalSums, type ZoneSums, zoneSumsGeo, zoneSumsMd } from './zone-sums.js';
 
 export interface Thickness {
   md: number;
@@ -73,35 +71,17 @@ export interface ZoneSummary {
   clamped: { vsh: number; phit: number; phie: number; sw: number };
 }
 
-/** Running sums of one interval class (gross, net reservoir or net pay). */
-class Sums {
-  h = 0; hv = 0; ht = 0;
-  hPhi = 0; phiH = 0; phiHv = 0; phiHt = 0;
-  phiHSw = 0; phiSwH = 0; hc = 0; hcv = 0; hct = 0;
-  hVsh = 0; vshH = 0;
-  add(h: number, hv: number, ht: number, vsh: number, phi: number, sw: number): void {
-    this.h += h; this.hv += hv; this.ht += ht;
-    if (phi === phi) {
-      this.hPhi += h; this.phiH += phi * h; this.phiHv += phi * hv; this.phiHt += phi * ht;
-      if (sw === sw) {
-        this.phiHSw += phi * h; this.phiSwH += phi * sw * h;
-        const so = phi * (1 - sw);
-        this.hc += so * h; this.hcv += so * hv; this.hct += so * ht;
-      }
-    }
-    if (vsh === vsh) { this.hVsh += h; this.vshH += vsh * h; }
-  }
-  result(geo: boolean, grossMd?: number, grossTvd?: number, grossTvt?: number): IntervalSummary {
-    const t = (md: number, v: number, tt: number): Thickness => ({ md, tvd: geo ? v : null, tvt: geo ? tt : null });
-    return {
-      thickness: grossMd === undefined ? t(this.h, this.hv, this.ht) : t(grossMd, grossTvd!, grossTvt!),
-      meanPhi: this.hPhi > 0 ? this.phiH / this.hPhi : null,
-      meanSw: this.phiHSw > 0 ? this.phiSwH / this.phiHSw : null,
-      meanVsh: this.hVsh > 0 ? this.vshH / this.hVsh : null,
-      phiH: t(this.phiH, this.phiHv, this.phiHt),
-      hcpt: t(this.hc, this.hcv, this.hct),
-    };
-  }
+/** Summary of one interval class from its sums; gross thickness given for the gross class. */
+function intervalSummary(s: IntervalSums, geo: boolean, grossMd?: number, grossTvd?: number, grossTvt?: number): IntervalSummary {
+  const t = (md: number, v: number, tt: number): Thickness => ({ md, tvd: geo ? v : null, tvt: geo ? tt : null });
+  return {
+    thickness: grossMd === undefined ? t(s.h, s.hv, s.ht) : t(grossMd, grossTvd!, grossTvt!),
+    meanPhi: s.hPhi > 0 ? s.phiH / s.hPhi : null,
+    meanSw: s.phiHSw > 0 ? s.phiSwH / s.phiHSw : null,
+    meanVsh: s.hVsh > 0 ? s.vshH / s.hVsh : null,
+    phiH: t(s.phiH, s.phiHv, s.phiHt),
+    hcpt: t(s.hc, s.hcv, s.hct),
+  };
 }
 
 export interface SummariseInput {
@@ -163,77 +143,37 @@ function summariseOne(
   end: number,
   g: SampleGeometry | undefined,
 ): ZoneSummary {
-  const n = d.length;
-  const { VSH, PHIE, SW } = curves;
-  const PERM = curves.PERM;
-  const permMin = c.permMin ?? -Infinity;
-  const gross = new Sums(), res = new Sums(), pay = new Sums();
-  let sampleCount = 0, nullCount = 0, nullThickness = 0;
-  const clamped = { vsh: 0, phit: 0, phie: 0, sw: 0 };
   const top = z.top, base = z.base;
-  // Vertical geometry: positions at the zone's top and base, and the TVT dip terms.
-  const geo = g !== undefined;
-  const pTop = geo ? geometryPositionAt(g, top) : undefined;
-  const pBase = geo ? geometryPositionAt(g, base) : undefined;
-  const dip = geo && g.hasHorizontal ? (z.dipDeg ?? 0) : 0;
-  const tanDip = Math.tan((dip * Math.PI) / 180);
-  const az = ((z.dipAzimuthDeg ?? 0) * Math.PI) / 180;
-  const kN = tanDip * Math.cos(az), kE = tanDip * Math.sin(az);
-  const tvd = g?.at.tvd, north = g?.at.north, east = g?.at.east;
-
-  let upper = start === 0 ? d[0] - 0.5 * (d[1] - d[0]) : 0.5 * (d[start - 1] + d[start]);
-  for (let i = start; i < end; i++) {
-    const lower = i < n - 1 ? 0.5 * (d[i] + d[i + 1]) : d[n - 1] + 0.5 * (d[n - 1] - d[n - 2]);
-    const clipTop = upper < top, clipBase = lower > base;
-    const a = clipTop ? top : upper, b = clipBase ? base : lower;
-    upper = lower;
-    const h = b - a;
-    if (!(h > 0)) continue;
-    let hv = 0, ht = 0;
-    if (geo) {
-      const tvA = clipTop ? pTop!.tvd : tvd![i], tvB = clipBase ? pBase!.tvd : tvd![i + 1];
-      hv = tvB - tvA;
-      if (dip !== 0) {
-        const dN = (clipBase ? pBase!.north : north![i + 1]) - (clipTop ? pTop!.north : north![i]);
-        const dE = (clipBase ? pBase!.east : east![i + 1]) - (clipTop ? pTop!.east : east![i]);
-        ht = hv - (kN * dN + kE * dE);
-      } else ht = hv;
-    }
-    sampleCount++;
-    const vsh = VSH[i], phi = PHIE[i], sw = SW[i];
-    gross.add(h, hv, ht, vsh, phi, sw);
-    const r = reservoirFlag(vsh, phi, PERM ? PERM[i] : NaN, c.vshMax, c.phiMin, permMin);
-    const p = payFlag(r, sw, c.swMax);
-    if (r === 1) res.add(h, hv, ht, vsh, phi, sw);
-    if (p === 1) pay.add(h, hv, ht, vsh, phi, sw);
-    else if (p !== p) { nullCount++; nullThickness += h; }
-    if (qc) {
-      const q = qc[i];
-      if (q !== 0) {
-        if (q & QC_VSH_CLIPPED) clamped.vsh++;
-        if (q & QC_PHIT_CLAMPED) clamped.phit++;
-        if (q & QC_PHIE_CLAMPED) clamped.phie++;
-        if (q & QC_SW_CLAMPED) clamped.sw++;
-      }
-    }
-  }
   const grossMd = base - top;
-  const grossTvd = geo ? pBase!.tvd - pTop!.tvd : 0;
-  const grossTvt = geo ? grossTvd - (dip !== 0 ? kN * (pBase!.north - pTop!.north) + kE * (pBase!.east - pTop!.east) : 0) : 0;
+  let grossTvd = 0, grossTvt = 0, sums: ZoneSums;
+  if (g === undefined) sums = zoneSumsMd(d, curves.VSH, curves.PHIE, curves.SW, curves.PERM, qc, c, top, base, start, end);
+  else {
+    // Vertical geometry: positions at the zone's top and base, and the TVT dip terms.
+    const pTop = geometryPositionAt(g, top), pBase = geometryPositionAt(g, base);
+    const dip = g.hasHorizontal ? (z.dipDeg ?? 0) : 0;
+    const tanDip = Math.tan((dip * Math.PI) / 180);
+    const az = ((z.dipAzimuthDeg ?? 0) * Math.PI) / 180;
+    const kN = tanDip * Math.cos(az), kE = tanDip * Math.sin(az);
+    const { tvd, north, east } = g.at;
+    sums = zoneSumsGeo(d, curves.VSH, curves.PHIE, curves.SW, curves.PERM, qc, c, top, base, start, end, { tvd, north, east, top: pTop, base: pBase, dipping: dip !== 0, kN, kE });
+    grossTvd = pBase.tvd - pTop.tvd;
+    grossTvt = grossTvd - (dip !== 0 ? kN * (pBase.north - pTop.north) + kE * (pBase.east - pTop.east) : 0);
+  }
+  const geo = g !== undefined;
   return {
     zone: z.name,
     formation: formationOf(z),
     top,
     base,
     cutoffs: { ...c },
-    gross: gross.result(geo, grossMd, grossTvd, grossTvt),
-    netReservoir: res.result(geo),
-    netPay: pay.result(geo),
-    netToGross: res.h / grossMd,
-    payToGross: pay.h / grossMd,
-    sampleCount,
-    nullCount,
-    nullThickness,
-    clamped,
+    gross: intervalSummary(sums.gross, geo, grossMd, grossTvd, grossTvt),
+    netReservoir: intervalSummary(sums.res, geo),
+    netPay: intervalSummary(sums.pay, geo),
+    netToGross: sums.res.h / grossMd,
+    payToGross: sums.pay.h / grossMd,
+    sampleCount: sums.sampleCount,
+    nullCount: sums.nullCount,
+    nullThickness: sums.nullThickness,
+    clamped: sums.clamped,
   };
 }

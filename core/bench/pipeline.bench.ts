@@ -1,7 +1,7 @@
 // Benchmark: evaluateWell on a synthetic 1,000,000-sample well against a memory-bound floor
 // (a plain loop that reads the same input arrays, writes the same output arrays and reads
 // the outputs back once, as the summary pass does), measured in the same run.
-// Run: npm run bench -w core (or: node --expose-gc --import tsx bench/pipeline.bench.ts)
+// Run: npm run bench -w core -- pipeline (compiled by tsc, run by plain Node; see run.mjs)
 import { defaultZoneParameters } from '../src/evaluation/zone-parameters.js';
 import { type EvaluateWellInput, evaluateWell } from '../src/evaluation/pipeline.js';
 import type { ZoneParameters } from '../src/evaluation/zone-parameters.js';

@@ -152,6 +152,7 @@ export type { SurveyStation, SurveyTable, SurveyPath, PathPositions } from './su
 // --- Binary transfer of curve samples ---
 export { encodeCurveBundle, decodeCurveBundle } from './transfer/curve-bundle.js';
 export type { CurveBundle, CurveBundleEntry } from './transfer/curve-bundle.js';
+export { float64ToBytes, bytesToFloat64 } from './transfer/float64-bytes.js';
 
 // --- Reserves: volumetrics, gas PVT, Monte Carlo, decline, material balance, inflow ---
 export {

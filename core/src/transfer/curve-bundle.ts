@@ -1,4 +1,5 @@
 import { decodeUtf8Strict, encodeUtf8 } from '../las/text.js';
+import { littleEndianHost, swapFloat64 } from './float64-bytes.js';
 
 /**
  * Curve bundle: a compact binary frame that carries several sample arrays (one per curve)
@@ -71,12 +72,4 @@ export function decodeCurveBundle(bytes: Uint8Array): CurveBundle {
   if (!littleEndianHost()) swapFloat64(raw);
   const all = new Float64Array(raw.buffer, 0, n * header.curves.length);
   return { entries: header.curves, values: header.curves.map((_, i) => all.slice(i * n, (i + 1) * n)) };
-}
-
-function littleEndianHost(): boolean {
-  return new Uint8Array(new Uint16Array([1]).buffer)[0] === 1;
-}
-
-function swapFloat64(bytes: Uint8Array): void {
-  for (let i = 0; i + 8 <= bytes.length; i += 8) bytes.subarray(i, i + 8).reverse();
 }

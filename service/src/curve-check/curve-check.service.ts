@@ -1,6 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { CURVE_CLASSES, normaliseCurveUnits, type CurveClass } from '@poreline/core';
-import { fromFloat64Bytes } from '../log-runs/curve-stats.js';
+import { bytesToFloat64, CURVE_CLASSES, normaliseCurveUnits, type CurveClass } from '@poreline/core';
 import { WellsService } from '../wells/wells.service.js';
 import { checkCurve } from './check-curve.js';
 import { CurveCheckRepository } from './curve-check.repository.js';
@@ -33,7 +32,7 @@ export class CurveCheckService {
   async check(assetId: string, wellId: string): Promise<CurveCheckDto[]> {
     await this.wells.require(assetId, wellId);
     const rows = await this.repository.curvesWithSamples(wellId);
-    const depthOf = new Map(rows.filter((r) => r.position === 0).map((r) => [r.logRunId, fromFloat64Bytes(r.samples)]));
+    const depthOf = new Map(rows.filter((r) => r.position === 0).map((r) => [r.logRunId, bytesToFloat64(r.samples)]));
     return rows
       .filter((r) => r.position > 0)
       .map((r) => ({
@@ -43,7 +42,7 @@ export class CurveCheckService {
         mnemonic: r.mnemonic,
         unit: r.unit,
         curveClass: r.curveClass,
-        ...checkCurve(depthOf.get(r.logRunId)!, fromFloat64Bytes(r.samples), expectedInUnit(r.curveClass, r.unit)),
+        ...checkCurve(depthOf.get(r.logRunId)!, bytesToFloat64(r.samples), expectedInUnit(r.curveClass, r.unit)),
       }));
   }
 }

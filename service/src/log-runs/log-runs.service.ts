@@ -1,10 +1,10 @@
 import { BadRequestException, Inject, Injectable, NotFoundException } from '@nestjs/common';
-import { encodeCurveBundle, LasParseError, readLas, recogniseCurve } from '@poreline/core';
+import { encodeCurveBundle, float64ToBytes, bytesToFloat64, LasParseError, readLas, recogniseCurve } from '@poreline/core';
 import { createHash } from 'node:crypto';
 import type { AuthUser } from '../auth/auth-user.js';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { WellsService } from '../wells/wells.service.js';
-import { curveStats, fromFloat64Bytes, toFloat64Bytes } from './curve-stats.js';
+import { curveStats } from './curve-stats.js';
 import type { UploadResponseDto, UploadResultDto } from './dto/log-run.dto.js';
 import { LogRunsRepository } from './log-runs.repository.js';
 
@@ -87,7 +87,7 @@ export class LogRunsService {
         unit: c.unit,
         description: c.description,
         curveClass: position === 0 ? 'depth' : (recogniseCurve(c.mnemonic, c.unit, c.description)?.curveClass ?? null),
-        samples: toFloat64Bytes(c.values),
+        samples: float64ToBytes(c.values),
         ...curveStats(c.values),
       })),
       { assetId, userId: user.id },
@@ -103,7 +103,7 @@ export class LogRunsService {
     const rows = await this.runs.samplesOf(runId);
     return encodeCurveBundle(
       rows.map((r) => ({ mnemonic: r.mnemonic, unit: r.unit, curveClass: r.curveClass, description: r.description })),
-      rows.map((r) => fromFloat64Bytes(r.samples)),
+      rows.map((r) => bytesToFloat64(r.samples)),
     );
   }
 }

@@ -1,8 +1,7 @@
 import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
-import { convertDepths, encodeCurveBundle, normaliseCurveUnits } from '@poreline/core';
+import { bytesToFloat64, convertDepths, encodeCurveBundle, normaliseCurveUnits } from '@poreline/core';
 import { BINDING_CLASSES, type BindingKey } from '../bindings/binding-keys.js';
 import { convertDepth, normaliseDepthUnit, type DepthUnit } from '../common/well-depth.js';
-import { fromFloat64Bytes } from '../log-runs/curve-stats.js';
 import { mergeRuns, spliceOutside } from './merge-runs.js';
 import { MergedSamplesRepository } from './merged-samples.repository.js';
 
@@ -66,7 +65,7 @@ export class MergedSamplesService {
       if (!runUnit) throw new BadRequestException(`Log run ${run.fileName} has a non-depth index (${run.depthUnit}); it cannot be merged on depth.`);
       let normalised;
       try {
-        normalised = normaliseCurveUnits(fromFloat64Bytes(curve.samples), curve.unit, BINDING_CLASSES[b.binding]);
+        normalised = normaliseCurveUnits(bytesToFloat64(curve.samples), curve.unit, BINDING_CLASSES[b.binding]);
       } catch (error) {
         throw new BadRequestException(`Binding ${b.binding} (${b.mnemonic} of ${run.fileName}): ${(error as Error).message.replace(/^normaliseCurveUnits: /, '')}`);
       }
@@ -81,7 +80,7 @@ export class MergedSamplesService {
           const index = indexOf(run.id);
           if (!curve || !index) return [];
           try {
-            const normalised = normaliseCurveUnits(fromFloat64Bytes(curve.samples), curve.unit, BINDING_CLASSES[b.binding]);
+            const normalised = normaliseCurveUnits(bytesToFloat64(curve.samples), curve.unit, BINDING_CLASSES[b.binding]);
             return [{ run, curve, normalised, ...this.runDepth(index.samples, run, normaliseDepthUnit(run.depthUnit)!, depthUnit) }];
           } catch {
             return []; // a unit that does not fit this class is never spliced in
@@ -119,7 +118,7 @@ export class MergedSamplesService {
 
   private runDepth(indexSamples: Uint8Array, run: { step: number | null }, runUnit: DepthUnit, depthUnit: DepthUnit) {
     return {
-      depth: convertDepths(fromFloat64Bytes(indexSamples), runUnit, depthUnit),
+      depth: convertDepths(bytesToFloat64(indexSamples), runUnit, depthUnit),
       step: run.step === null ? null : convertDepth(run.step, runUnit, depthUnit),
     };
   }

@@ -57,9 +57,10 @@ function sums(h: number, hPhi: number, phiH: number, phiHSw: number, phiSwH: num
 export function zoneSumsMd(d: Depth, VSH: Curve, PHIE: Curve, SW: Curve, PERM: Curve | undefined, qc: Uint8Array | undefined, c: CutoffSet, top: number, base: number, start: number, end: number): ZoneSums {
   const n = d.length;
   const vshMax = c.vshMax, phiMin = c.phiMin, swMax = c.swMax, permMin = c.permMin ?? -Infinity;
+  const usePerm = permMin > -Infinity;
   let gH = 0, gHPhi = 0, gPhiH = 0, gPhiHSw = 0, gPhiSwH = 0, gHc = 0, gHVsh = 0, gVshH = 0;
-  let rH = 0, rHPhi = 0, rPhiH = 0, rPhiHSw = 0, rPhiSwH = 0, rHc = 0, rHVsh = 0, rVshH = 0;
-  let pH = 0, pHPhi = 0, pPhiH = 0, pPhiHSw = 0, pPhiSwH = 0, pHc = 0, pHVsh = 0, pVshH = 0;
+  let rH = 0, rPhiH = 0, rPhiHSw = 0, rPhiSwH = 0, rHc = 0, rVshH = 0;
+  let pH = 0, pPhiH = 0, pPhiSwH = 0, pHc = 0, pVshH = 0;
   let sampleCount = 0, nullCount = 0, nullThickness = 0;
   let cVsh = 0, cPhit = 0, cPhie = 0, cSw = 0;
   let upper = start === 0 ? d[0] - 0.5 * (d[1] - d[0]) : 0.5 * (d[start - 1] + d[start]);
@@ -69,30 +70,42 @@ export function zoneSumsMd(d: Depth, VSH: Curve, PHIE: Curve, SW: Curve, PERM: C
     upper = lower;
     if (!(h > 0)) continue;
     sampleCount++;
-    const vsh = VSH[i], phi = PHIE[i], sw = SW[i];
-    const r = reservoirFlag(vsh, phi, PERM ? PERM[i] : NaN, vshMax, phiMin, permMin);
-    const p = payFlag(r, sw, swMax);
+    const vsh = VSH[i], phi = PHIE[i], sw = SW[i], perm = usePerm ? (PERM ? PERM[i] : NaN) : 0;
     gH += h;
-    if (r === 1) rH += h;
-    if (p === 1) pH += h;
-    else if (p !== p) { nullCount++; nullThickness += h; }
-    if (phi === phi) {
-      const ph = phi * h;
-      gHPhi += h; gPhiH += ph;
-      if (r === 1) { rHPhi += h; rPhiH += ph; }
-      if (p === 1) { pHPhi += h; pPhiH += ph; }
-      if (sw === sw) {
-        const psh = phi * sw * h, hc = phi * (1 - sw) * h;
-        gPhiHSw += ph; gPhiSwH += psh; gHc += hc;
-        if (r === 1) { rPhiHSw += ph; rPhiSwH += psh; rHc += hc; }
-        if (p === 1) { pPhiHSw += ph; pPhiSwH += psh; pHc += hc; }
+    if (phi === phi && sw === sw && vsh === vsh && perm === perm) {
+      // Every value known (nearly every sample): plain comparisons, reservoir then pay.
+      const ph = phi * h, psh = phi * sw * h, hc = phi * (1 - sw) * h, vh = vsh * h;
+      gHPhi += h; gPhiH += ph; gPhiHSw += ph; gPhiSwH += psh; gHc += hc; gHVsh += h; gVshH += vh;
+      if (vsh <= vshMax && phi >= phiMin && perm >= permMin) {
+        rH += h; rPhiH += ph; rPhiHSw += ph; rPhiSwH += psh; rHc += hc; rVshH += vh;
+        if (sw <= swMax) {
+          pH += h; pPhiH += ph; pPhiSwH += psh; pHc += hc; pVshH += vh;
+        }
       }
-    }
-    if (vsh === vsh) {
-      const vh = vsh * h;
-      gHVsh += h; gVshH += vh;
-      if (r === 1) { rHVsh += h; rVshH += vh; }
-      if (p === 1) { pHVsh += h; pVshH += vh; }
+    } else {
+      // A missing value: the flags by their kernels (1, 0 or NaN).
+      const ph = phi * h, vh = vsh * h;
+      const r = reservoirFlag(vsh, phi, usePerm ? perm : NaN, vshMax, phiMin, permMin);
+      const p = payFlag(r, sw, swMax);
+      if (r === 1) rH += h;
+      if (p === 1) pH += h;
+      else if (p !== p) { nullCount++; nullThickness += h; }
+      if (phi === phi) {
+        gHPhi += h; gPhiH += ph;
+        if (r === 1) rPhiH += ph;
+        if (p === 1) pPhiH += ph;
+        if (sw === sw) {
+          const psh = phi * sw * h, hc = phi * (1 - sw) * h;
+          gPhiHSw += ph; gPhiSwH += psh; gHc += hc;
+          if (r === 1) { rPhiHSw += ph; rPhiSwH += psh; rHc += hc; }
+          if (p === 1) { pPhiSwH += psh; pHc += hc; }
+        }
+      }
+      if (vsh === vsh) {
+        gHVsh += h; gVshH += vh;
+        if (r === 1) rVshH += vh;
+        if (p === 1) pVshH += vh;
+      }
     }
     if (qc !== undefined) {
       const q = qc[i];
@@ -104,10 +117,12 @@ export function zoneSumsMd(d: Depth, VSH: Curve, PHIE: Curve, SW: Curve, PERM: C
       }
     }
   }
+  // A net reservoir sample has VSH and PHIE known, a net pay sample SW too: the thickness with
+  // a known value of those is the class thickness itself (the same terms in the same order).
   return {
     gross: sums(gH, gHPhi, gPhiH, gPhiHSw, gPhiSwH, gHc, gHVsh, gVshH),
-    res: sums(rH, rHPhi, rPhiH, rPhiHSw, rPhiSwH, rHc, rHVsh, rVshH),
-    pay: sums(pH, pHPhi, pPhiH, pPhiHSw, pPhiSwH, pHc, pHVsh, pVshH),
+    res: sums(rH, rH, rPhiH, rPhiHSw, rPhiSwH, rHc, rH, rVshH),
+    pay: sums(pH, pH, pPhiH, pPhiH, pPhiSwH, pHc, pH, pVshH),
     sampleCount, nullCount, nullThickness,
     clamped: { vsh: cVsh, phit: cPhit, phie: cPhie, sw: cSw },
   };

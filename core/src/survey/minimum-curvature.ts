@@ -16,6 +16,8 @@
  * (azimuth clockwise from north; inclination from vertical).
  */
 
+import { arcSin, arcVersine } from './arc-terms.js';
+
 export interface SurveyStation {
   md: number;
   /** Inclination from vertical, degrees, [0, 180]. */
@@ -246,8 +248,8 @@ function positionAt(path: SurveyPath, arcs: boolean, k: number, seg: number, m: 
     b = 0.5 * f * f * arc.dmd;
   } else {
     const R = arc.dmd / arc.beta, th = f * arc.beta;
-    a = R * Math.sin(th);
-    b = R * (1 - Math.cos(th));
+    a = R * arcSin(th);
+    b = R * arcVersine(th);
   }
   out.tvd[i] = path.tvd[seg] + a * v1 + b * arc.uv;
   out.north[i] = path.north[seg] + a * n1 + b * arc.un;

@@ -132,6 +132,7 @@ export function zoneSumsMd(d: Depth, VSH: Curve, PHIE: Curve, SW: Curve, PERM: C
 export function zoneSumsGeo(d: Depth, VSH: Curve, PHIE: Curve, SW: Curve, PERM: Curve | undefined, qc: Uint8Array | undefined, c: CutoffSet, top: number, base: number, start: number, end: number, v: ZoneVertical): ZoneSums {
   const n = d.length;
   const vshMax = c.vshMax, phiMin = c.phiMin, swMax = c.swMax, permMin = c.permMin ?? -Infinity;
+  const usePerm = permMin > -Infinity;
   const { tvd, north, east, dipping, kN, kE } = v;
   const tvTop = v.top.tvd, nTop = v.top.north, eTop = v.top.east;
   const tvBase = v.base.tvd, nBase = v.base.north, eBase = v.base.east;
@@ -153,13 +154,22 @@ export function zoneSumsGeo(d: Depth, VSH: Curve, PHIE: Curve, SW: Curve, PERM: 
       ht = hv - (kN * dN + kE * dE);
     }
     sampleCount++;
-    const vsh = VSH[i], phi = PHIE[i], sw = SW[i];
-    const r = reservoirFlag(vsh, phi, PERM ? PERM[i] : NaN, vshMax, phiMin, permMin);
-    const p = payFlag(r, sw, swMax);
+    const vsh = VSH[i], phi = PHIE[i], sw = SW[i], perm = usePerm ? (PERM ? PERM[i] : NaN) : 0;
     add(g, h, hv, ht, vsh, phi, sw);
-    if (r === 1) add(r1, h, hv, ht, vsh, phi, sw);
-    if (p === 1) add(p1, h, hv, ht, vsh, phi, sw);
-    else if (p !== p) { nullCount++; nullThickness += h; }
+    if (phi === phi && sw === sw && vsh === vsh && perm === perm) {
+      // Every value known (nearly every sample): plain comparisons, reservoir then pay.
+      if (vsh <= vshMax && phi >= phiMin && perm >= permMin) {
+        add(r1, h, hv, ht, vsh, phi, sw);
+        if (sw <= swMax) add(p1, h, hv, ht, vsh, phi, sw);
+      }
+    } else {
+      // A missing value: the flags by their kernels (1, 0 or NaN).
+      const r = reservoirFlag(vsh, phi, usePerm ? perm : NaN, vshMax, phiMin, permMin);
+      const p = payFlag(r, sw, swMax);
+      if (r === 1) add(r1, h, hv, ht, vsh, phi, sw);
+      if (p === 1) add(p1, h, hv, ht, vsh, phi, sw);
+      else if (p !== p) { nullCount++; nullThickness += h; }
+    }
     if (qc !== undefined) {
       const q = qc[i];
       if (q !== 0) {

@@ -25,10 +25,17 @@ function fmt(v: number): string {
   return String(Number(v.toPrecision(10)));
 }
 
-/** Computes {@link LasIndexInfo} and records disagreements with the header in `log`. */
-export function indexInfo(input: IndexInput, log: DiagnosticLog): LasIndexInfo {
-  const { values, declared } = input;
-  const rows = values.length;
+/** Null rows and the order of the non-null values, in one pass. */
+interface OrderScan {
+  nulls: number;
+  firstNullRow: number;
+  up: number;
+  down: number;
+  flat: number;
+  firstDisorderRow: number;
+}
+
+function scanOrder(values: Float64Array): OrderScan {
   let nulls = 0;
   let firstNullRow = -1;
   let up = 0;
@@ -36,7 +43,7 @@ export function indexInfo(input: IndexInput, log: DiagnosticLog): LasIndexInfo {
   let flat = 0;
   let firstDisorderRow = -1;
   let prev = Number.NaN;
-  for (let r = 0; r < rows; r++) {
+  for (let r = 0; r < values.length; r++) {
     const v = values[r];
     if (v !== v) {
       nulls++;
@@ -51,6 +58,27 @@ export function indexInfo(input: IndexInput, log: DiagnosticLog): LasIndexInfo {
     }
     prev = v;
   }
+  return { nulls, firstNullRow, up, down, flat, firstDisorderRow };
+}
+
+/** Whether every spacing of `values` is within {@link STEP_TOLERANCE} of `mean`. */
+function evenlySpaced(values: Float64Array, mean: number): boolean {
+  const tol = Math.abs(mean) * STEP_TOLERANCE;
+  for (let r = 1; r < values.length; r++) {
+    if (Math.abs(values[r] - values[r - 1] - mean) > tol) return false;
+  }
+  return true;
+}
+
+/**
+ * Computes {@link LasIndexInfo} and records disagreements with the header in `log`. The two
+ * passes over the values are functions of their own, so that the optimizing compiler
+ * compiles each loop whole instead of entering this function mid-loop on every call.
+ */
+export function indexInfo(input: IndexInput, log: DiagnosticLog): LasIndexInfo {
+  const { values, declared } = input;
+  const rows = values.length;
+  const { nulls, firstNullRow, up, down, flat, firstDisorderRow } = scanOrder(values);
   if (nulls > 0) {
     log.add('error', null, `index ${input.mnemonic} is null on ${nulls} rows (first: row ${firstNullRow + 1}); those rows have no depth`);
   }
@@ -68,11 +96,7 @@ export function indexInfo(input: IndexInput, log: DiagnosticLog): LasIndexInfo {
   let step: number | null = null;
   if (direction !== 'unordered' && nulls === 0 && rows >= 2) {
     const mean = (stop - start) / (rows - 1);
-    let regular = true;
-    for (let r = 1; r < rows && regular; r++) {
-      if (Math.abs(values[r] - values[r - 1] - mean) > Math.abs(mean) * STEP_TOLERANCE) regular = false;
-    }
-    if (regular) {
+    if (evenlySpaced(values, mean)) {
       const d = declared.step;
       step = d !== null && d !== 0 && Math.abs(d - mean) <= Math.abs(mean) * STEP_TOLERANCE ? d : Number(mean.toPrecision(12));
       if (d === null || d === 0) {

@@ -4,7 +4,9 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { DiagnosticLog } from './errors.js';
-import { scanDataFast, scanDataGeneral, type DataScanParams } from './data-section.js';
+import type { DataScanParams } from './data-section.js';
+import { scanDataFast } from './data-fast.js';
+import { scanDataGeneral } from './data-general.js';
 import { parseNumberText } from './number.js';
 
 const enc = new TextEncoder();

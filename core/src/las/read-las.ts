@@ -3,7 +3,9 @@
  * ~Log_Parameter, ~Log_Definition, ~Log_Data; other 3.0 groups kept as text).
  */
 import { DiagnosticLog, LasParseError } from './errors.js';
-import { scanDataFast, scanDataGeneral, type DataScanResult } from './data-section.js';
+import type { DataScanResult } from './data-section.js';
+import { scanDataFast } from './data-fast.js';
+import { scanDataGeneral } from './data-general.js';
 import { parseHeaderLine } from './header-line.js';
 import { indexInfo } from './index-info.js';
 import { parseNumberText } from './number.js';

@@ -14,7 +14,7 @@ describe('foundation in Chromium: sign in, upload a LAS file, see its depth trac
     const page = await browser.newPage();
     await page.goto(baseUrl + '/assets');
     await page.waitForURL(/\/sign-in/);
-    expect(await page.getByRole('button', { name: 'Sign in' }).isVisible()).toBe(true);
+    await page.getByRole('button', { name: 'Sign in' }).waitFor({ state: 'visible' }); // fails the test when it does not show
     await page.close();
   });
 

@@ -78,9 +78,9 @@ describe('reserves in Chromium: an engineer builds a case from approved net pay,
     expect(pct.p90).toBeGreaterThan(0);
     expect(pct.p90).toBeLessThan(pct.p50);
     expect(pct.p50).toBeLessThan(pct.p10);
-    expect(await page.getByRole('heading', { name: /Monte Carlo: 100,000 trials/ }).isVisible()).toBe(true);
-    expect(await page.getByRole('img', { name: /histogram of 100000 trials/ }).isVisible()).toBe(true);
-    expect(await page.getByRole('img', { name: /Tornado of Recoverable/ }).isVisible()).toBe(true);
+    await page.getByRole('heading', { name: /Monte Carlo: 100,000 trials/ }).waitFor({ state: 'visible' }); // fails the test when it does not show
+    await page.getByRole('img', { name: /histogram of 100000 trials/ }).waitFor({ state: 'visible' });
+    await page.getByRole('img', { name: /Tornado of Recoverable/ }).waitFor({ state: 'visible' });
     await screenshot(page, 'reserves-case-results');
 
     // XLSX export: the workbook carries the caution and the same P90
@@ -147,7 +147,7 @@ describe('reserves in Chromium: an engineer builds a case from approved net pay,
     await page.getByRole('tab', { name: /Inflow/ }).click();
     await page.getByRole('button', { name: 'Estimate rate' }).click();
     await page.getByRole('region', { name: 'Inflow result' }).waitFor();
-    expect(await page.getByText(/as productively as a vertical well/).isVisible()).toBe(true);
+    await page.getByText(/as productively as a vertical well/).waitFor({ state: 'visible' });
     await screenshot(page, 'reserves-inflow');
     await page.close();
   });

@@ -16,6 +16,7 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import { useId, useMemo, useState, type ReactNode } from 'react';
+import { SortableHeaderCell } from './sortable-header-cell';
 
 /**
  * A summary table with sorting (click a header), a text filter over the text columns and a
@@ -162,24 +163,19 @@ export function SummaryTable<T>({ name, rows, columns, rowId, initialSort = [], 
           {table.getHeaderGroups().map((group) => (
             <Table.Row key={group.id}>
               {group.headers.map((header) => {
-                const sorted = header.column.getIsSorted();
                 const spec = byId.get(header.column.id);
                 return (
-                  <Table.ColumnHeaderCell
+                  <SortableHeaderCell
                     key={header.id}
-                    aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}
+                    sorted={header.column.getIsSorted()}
+                    onToggle={header.column.getToggleSortingHandler()}
                     className={spec?.kind === 'number' ? 'summary-table__num' : undefined}
                   >
-                    <button type="button" className="sort-button" onClick={header.column.getToggleSortingHandler()}>
-                      <span>
-                        {spec?.header}
-                        {spec?.unit ? <span className="summary-table__unit">{spec.unit}</span> : null}
-                      </span>
-                      <span aria-hidden="true" className="sort-button__mark">
-                        {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '△'}
-                      </span>
-                    </button>
-                  </Table.ColumnHeaderCell>
+                    <span>
+                      {spec?.header}
+                      {spec?.unit ? <span className="summary-table__unit">{spec.unit}</span> : null}
+                    </span>
+                  </SortableHeaderCell>
                 );
               })}
             </Table.Row>

@@ -10,6 +10,7 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
+import { SortableHeaderCell } from '../../../components/sortable-header-cell';
 import type { UserAccount } from '../../../types/admin';
 import { useUpdateUser } from '../api/update-user';
 
@@ -73,21 +74,11 @@ export function UsersTable({ users, currentUserId }: UsersTableProps) {
       <Table.Header>
         {table.getHeaderGroups().map((group) => (
           <Table.Row key={group.id}>
-            {group.headers.map((header) => {
-              const sorted = header.column.getIsSorted();
-              return (
-                <Table.ColumnHeaderCell key={header.id} aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}>
-                  {header.isPlaceholder ? null : (
-                    <button type="button" className="sort-button" onClick={header.column.getToggleSortingHandler()}>
-                      <table.FlexRender header={header} />
-                      <span aria-hidden="true" className="sort-button__mark">
-                        {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '△'}
-                      </span>
-                    </button>
-                  )}
-                </Table.ColumnHeaderCell>
-              );
-            })}
+            {group.headers.map((header) => (
+              <SortableHeaderCell key={header.id} sorted={header.column.getIsSorted()} onToggle={header.column.getToggleSortingHandler()} placeholder={header.isPlaceholder}>
+                <table.FlexRender header={header} />
+              </SortableHeaderCell>
+            ))}
           </Table.Row>
         ))}
       </Table.Header>

@@ -12,6 +12,7 @@ import {
 } from '@tanstack/react-table';
 import { Fragment, useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
+import { SortableHeaderCell } from '../../../components/sortable-header-cell';
 import { formatDepthRange } from '../../../lib/format';
 import type { WellRow } from '../../../types/api';
 import { useUploadLogRuns } from '../api/upload-log-runs';
@@ -110,24 +111,11 @@ export function WellsTable({ assetId, wells, canUpload }: WellsTableProps) {
       <Table.Header>
         {table.getHeaderGroups().map((group) => (
           <Table.Row key={group.id}>
-            {group.headers.map((header) => {
-              const sorted = header.column.getIsSorted();
-              return (
-                <Table.ColumnHeaderCell
-                  key={header.id}
-                  aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}
-                >
-                  {header.isPlaceholder ? null : (
-                    <button type="button" className="sort-button" onClick={header.column.getToggleSortingHandler()}>
-                      <table.FlexRender header={header} />
-                      <span aria-hidden="true" className="sort-button__mark">
-                        {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '△'}
-                      </span>
-                    </button>
-                  )}
-                </Table.ColumnHeaderCell>
-              );
-            })}
+            {group.headers.map((header) => (
+              <SortableHeaderCell key={header.id} sorted={header.column.getIsSorted()} onToggle={header.column.getToggleSortingHandler()} placeholder={header.isPlaceholder}>
+                <table.FlexRender header={header} />
+              </SortableHeaderCell>
+            ))}
             {canUpload ? <Table.ColumnHeaderCell>Load LAS</Table.ColumnHeaderCell> : null}
           </Table.Row>
         ))}

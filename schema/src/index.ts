@@ -17,3 +17,4 @@ export type { ReviewStatus } from './tables/review.js';
 export type { Interpretation, NewInterpretation } from './tables/interpretations.js';
 export type { ReservesCase, NewReservesCase } from './tables/reserves-cases.js';
 export type { ProductionSeries, NewProductionSeries } from './tables/production-series.js';
+export type { MailMessage, NewMailMessage } from './tables/mail-messages.js';

@@ -16,3 +16,4 @@ export { reviewStatus } from './review.js';
 export { interpretations } from './interpretations.js';
 export { reservesCases } from './reserves-cases.js';
 export { productionSeries, productionKind } from './production-series.js';
+export { mailMessages, mailStatus } from './mail-messages.js';

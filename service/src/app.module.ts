@@ -13,6 +13,7 @@ import { DatabaseModule } from './database/database.module.js';
 import { DemoCheckModule } from './demo-check/demo-check.module.js';
 import { HealthModule } from './health/health.module.js';
 import { LogRunsModule } from './log-runs/log-runs.module.js';
+import { MailModule } from './mail/mail.module.js';
 import { ProductionModule } from './production/production.module.js';
 import { ReservesCasesModule } from './reserves-cases/reserves-cases.module.js';
 import { SeedModule } from './seed/seed.module.js';
@@ -32,6 +33,7 @@ export class AppModule {
       imports: [
         DatabaseModule.forHandle(database),
         AuditModule,
+        MailModule,
         AuthModule,
         AssetsModule,
         WellsModule,

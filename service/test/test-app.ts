@@ -35,6 +35,9 @@ export async function createTestApp(overrides: Partial<AppConfig> = {}): Promise
     // The demo users and empty demo asset only; pass { demoData: 'full' } for the whole demo field.
     demoData: 'users',
     uploadMaxBytes: 5 * 1024 * 1024,
+    // No SMTP_URL: the built-in catcher receives the notices (a real SMTP server on 127.0.0.1).
+    mailFrom: 'Poreline test <poreline@localhost>',
+    publicUrl: 'http://poreline.test',
     ...overrides,
   };
   const app = await createApp(config, { logger: false });

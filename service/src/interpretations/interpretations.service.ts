@@ -3,6 +3,7 @@ import type { Interpretation } from '@poreline/schema';
 import type { AuthUser } from '../auth/auth-user.js';
 import { APP_VERSION } from '../common/app-version.js';
 import { isUuid } from '../common/ids.js';
+import { ReviewNoticesService } from '../mail/review-notices.service.js';
 import { WellsService } from '../wells/wells.service.js';
 import { WorkbenchService } from '../workbench/workbench.service.js';
 import type { InterpretationDto } from './dto/interpretation.dto.js';
@@ -22,6 +23,7 @@ export class InterpretationsService {
     private readonly wells: WellsService,
     private readonly workbench: WorkbenchService,
     private readonly evaluation: EvaluationService,
+    private readonly notices: ReviewNoticesService,
   ) {}
 
   async list(assetId: string, wellId: string): Promise<InterpretationDto[]> {
@@ -131,6 +133,18 @@ export class InterpretationsService {
       after: interpretationAuditView(after),
     }));
     if (!updated) throw new ConflictException(`Version ${row.version} changed meanwhile; reload and try again.`);
+    const well = await this.wells.require(assetId, wellId);
+    await this.notices.stepTaken({
+      assetId,
+      action,
+      item: { kind: 'interpretation', wellName: well.name, version: row.version },
+      entity: 'interpretation',
+      entityId: row.id,
+      actorId: user.id,
+      authorIds: [row.createdBy, updated.submittedBy],
+      comment,
+      path: `/assets/${assetId}/wells/${wellId}/workbench`,
+    });
     return (await this.toDtos([updated]))[0];
   }
 

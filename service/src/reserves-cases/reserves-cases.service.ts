@@ -20,6 +20,8 @@ import type {
   UpdateReservesCaseDto,
   UserRef,
 } from './dto/reserves-case.dto.js';
+import type { NoticeAction } from '../mail/review-notice.js';
+import { ReviewNoticesService } from '../mail/review-notices.service.js';
 import { ReservesCasesRepository, type ApprovedVersion } from './reserves-cases.repository.js';
 import { findZoneSummary, normaliseDepthUnit, valuesOfSummary, type SourceSnapshot } from './source-values.js';
 
@@ -38,6 +40,7 @@ export class ReservesCasesService {
     private readonly cases: ReservesCasesRepository,
     private readonly audit: AuditService,
     private readonly crossChecks: CaseCrossChecks,
+    private readonly notices: ReviewNoticesService,
   ) {}
 
   async list(assetId: string): Promise<ReservesCaseSummaryDto[]> {
@@ -270,7 +273,7 @@ export class ReservesCasesService {
 
   // --- helpers ---
 
-  private async transition(row: ReservesCase, values: Partial<ReservesCase>, action: string, user: AuthUser): Promise<ReservesCaseDto> {
+  private async transition(row: ReservesCase, values: Partial<ReservesCase>, action: NoticeAction, user: AuthUser): Promise<ReservesCaseDto> {
     const saved = await this.cases.transaction(async (tx) => {
       const next = await this.cases.update(row.id, values, tx);
       await this.audit.record(
@@ -286,6 +289,17 @@ export class ReservesCasesService {
         tx,
       );
       return next;
+    });
+    await this.notices.stepTaken({
+      assetId: row.assetId,
+      action,
+      item: { kind: 'reserves-case', caseName: saved.name, revision: saved.revision },
+      entity: 'reserves-case',
+      entityId: row.id,
+      actorId: user.id,
+      authorIds: [row.createdBy, saved.submittedBy],
+      comment: saved.reviewComment,
+      path: `/assets/${row.assetId}/reserves/${row.id}`,
     });
     return this.toDto(saved);
   }

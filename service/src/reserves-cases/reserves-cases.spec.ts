@@ -5,6 +5,8 @@ import ExcelJS from 'exceljs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../../test/test-app.js';
 import { DatabaseService } from '../database/database.module.js';
+import { MailService } from '../mail/mail.service.js';
+import { VOLUMES_CAUTION } from '../mail/review-notice.js';
 import { DEMO_ASSET } from '../seed/demo-users.js';
 
 /** A zone summary in the shape core's summariseZones writes (depths in ft, no survey). */
@@ -283,6 +285,20 @@ describe('reserves cases: sources, overrides, runs, review and export', () => {
     expect((await t.http.post(`${url}/run`).set('Authorization', await t.tokenFor('engineer'))).status).toBe(409);
     const trail = await t.http.get(`${url}/audit`).set('Authorization', await t.tokenFor('viewer'));
     expect(trail.body.map((e: { action: string }) => e.action)).toEqual(expect.arrayContaining(['create', 'update', 'run', 'submit', 'return', 'approve']));
+    // E-mail notices: each submission to the reviewer, the return and the approval to the engineer, caution included.
+    await t.app.get(MailService).settled();
+    const mail = await t.http.get('/api/admin/mail').set('Authorization', await t.tokenFor('admin'));
+    const notices = (mail.body.messages as { id: string; event: string; to: string; status: string }[]).filter((m) => m.event.startsWith('reserves-case.'));
+    expect(notices.map((m) => `${m.event} -> ${m.to} (${m.status})`).sort()).toEqual([
+      'reserves-case.approved -> Eli Engineer <engineer@poreline.demo> (sent)',
+      'reserves-case.returned -> Eli Engineer <engineer@poreline.demo> (sent)',
+      'reserves-case.submitted -> Rui Reviewer <reviewer@poreline.demo> (sent)',
+      'reserves-case.submitted -> Rui Reviewer <reviewer@poreline.demo> (sent)',
+    ]);
+    const returnedNotice = await t.http.get(`/api/admin/mail/${notices.find((m) => m.event === 'reserves-case.returned')!.id}`).set('Authorization', await t.tokenFor('admin'));
+    expect(returnedNotice.body.body).toContain('Explain the RF range.');
+    expect(returnedNotice.body.body).toContain('Kestrel base case');
+    expect(returnedNotice.body.body).toContain(VOLUMES_CAUTION);
   });
 
   it('a newer approved interpretation makes the source stale; refresh moves a copy to it', async () => {

@@ -110,6 +110,13 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
                 return { Component: AdminRoute, loader: adminLoader(queryClient) };
               },
             },
+            {
+              path: 'admin/mail',
+              lazy: async () => {
+                const { AdminMailRoute, adminMailLoader } = await import('./routes/admin-mail');
+                return { Component: AdminMailRoute, loader: adminMailLoader(queryClient) };
+              },
+            },
             { path: '*', Component: NotFoundRoute },
           ],
         },

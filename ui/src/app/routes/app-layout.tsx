@@ -35,8 +35,13 @@ export function AppLayout() {
                   Assets
                 </NavLink>
                 {me.data?.isAdmin ? (
-                  <NavLink to="/admin" className="strong-link" style={{ marginLeft: 'var(--space-4)' }}>
+                  <NavLink to="/admin" end className="strong-link" style={{ marginLeft: 'var(--space-4)' }}>
                     Team and assets
+                  </NavLink>
+                ) : null}
+                {me.data?.isAdmin ? (
+                  <NavLink to="/admin/mail" className="strong-link" style={{ marginLeft: 'var(--space-4)' }}>
+                    Mail
                   </NavLink>
                 ) : null}
               </nav>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { composeReviewNotice, noticeEvent, VOLUMES_CAUTION, type ReviewNoticeInput } from './review-notice.js';
+import { composeReviewNotice, mailbox, noticeEvent, VOLUMES_CAUTION, type ReviewNoticeInput } from './review-notice.js';
 
 const base: ReviewNoticeInput = {
   action: 'submit',
@@ -39,5 +39,14 @@ describe('composeReviewNotice', () => {
   it('noticeEvent names the item kind and the step in the past tense', () => {
     expect(noticeEvent(base.item, 'submit')).toBe('interpretation.submitted');
     expect(noticeEvent({ kind: 'reserves-case', caseName: 'x', revision: 1 }, 'return')).toBe('reserves-case.returned');
+  });
+});
+
+describe('mailbox', () => {
+  it('quotes a display name holding a comma or a dot, leaves a plain one bare, drops quotes', () => {
+    expect(mailbox('Rui Reviewer', 'r@x.test')).toBe('Rui Reviewer <r@x.test>');
+    expect(mailbox('Larsen, Kim', 'k@x.test')).toBe('"Larsen, Kim" <k@x.test>');
+    expect(mailbox('J. "Jo" Smith', 'j@x.test')).toBe('"J. Jo Smith" <j@x.test>');
+    expect(mailbox('  ', 'e@x.test')).toBe('e@x.test');
   });
 });

@@ -61,3 +61,14 @@ export function composeReviewNotice(n: ReviewNoticeInput): { subject: string; bo
   lines.push('', '-- ', `Poreline. You get this notice as a member of ${n.assetName}.`);
   return { subject: `[Poreline] ${subject}`, body: lines.join('\n') + '\n' };
 }
+
+/**
+ * An address with a display name for the To header: the name is quoted when it holds a
+ * character that would otherwise split or end it (RFC 5322 3.2.3 "specials", e.g. a comma in
+ * "Larsen, Kim"); quotes and backslashes in it are dropped.
+ */
+export function mailbox(name: string, email: string): string {
+  const clean = name.replace(/["\\\r\n]/g, '').trim();
+  if (!clean) return email;
+  return /[()<>[\]:;@,.]/.test(clean) ? `"${clean}" <${email}>` : `${clean} <${email}>`;
+}

@@ -2,7 +2,7 @@ import { Inject, Injectable, Logger } from '@nestjs/common';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { MailRepository } from './mail.repository.js';
 import { MailService } from './mail.service.js';
-import { composeReviewNotice, noticeEvent, type NoticeAction, type ReviewedItem } from './review-notice.js';
+import { composeReviewNotice, mailbox, noticeEvent, type NoticeAction, type ReviewedItem } from './review-notice.js';
 
 /** A review step that has been committed, as the notices need it. */
 export interface ReviewStepTaken {
@@ -46,7 +46,7 @@ export class ReviewNoticesService {
       await this.mail.send(
         to.map((r) => {
           const { subject, body } = composeReviewNotice({ action: step.action, item: step.item, assetName, actorName: actor?.name ?? 'A user', recipientName: r.name, comment: step.comment, link });
-          return { assetId: step.assetId, toUserId: r.id, toAddress: `${r.name.replace(/["\\]/g, '')} <${r.email}>`, subject, body, event: noticeEvent(step.item, step.action), entity: step.entity, entityId: step.entityId };
+          return { assetId: step.assetId, toUserId: r.id, toAddress: mailbox(r.name, r.email), subject, body, event: noticeEvent(step.item, step.action), entity: step.entity, entityId: step.entityId };
         }),
       );
     } catch (error) {

@@ -202,13 +202,15 @@ export {
 export type { Distribution, Truncation, LognormalParams, LognormalSummary } from './reserves/distributions.js';
 export { runMonteCarlo, sampleInputs, perTrial, MAX_TRIALS } from './reserves/monte-carlo.js';
 export type { MonteCarloOptions, MonteCarloRun, VectorModel } from './reserves/monte-carlo.js';
+export { normalCorrelationForRank, sampleRankCorrelation, MAX_RANK_CORRELATION } from './reserves/rank-correlation.js';
+export type { InputCorrelation } from './reserves/rank-correlation.js';
 export { percentilesPrms, exceedanceCurve, PRMS_CONVENTION } from './reserves/percentiles.js';
 export type { PrmsSummary, ExceedanceCurve } from './reserves/percentiles.js';
 export { histogram } from './reserves/histogram.js';
 export type { Histogram, HistogramOptions } from './reserves/histogram.js';
 export { tornado } from './reserves/tornado.js';
 export type { TornadoBase, TornadoOptions, TornadoResult, TornadoRow } from './reserves/tornado.js';
-export { evaluateReservesCase, RESERVES_DISCLAIMER } from './reserves/reserves-case.js';
+export { evaluateReservesCase, RESERVES_DISCLAIMER, TORNADO_CORRELATION_NOTE } from './reserves/reserves-case.js';
 export type {
   ReservesCaseInput,
   ReservesCaseResult,

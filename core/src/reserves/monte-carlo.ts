@@ -1,5 +1,6 @@
 import { type Distribution, sampleDistribution } from './distributions.js';
 import { fillUniform, streamSeed } from './random.js';
+import { checkCorrelations, correlateUniforms, type InputCorrelation } from './rank-correlation.js';
 
 /** Largest number of trials accepted in one run. */
 export const MAX_TRIALS = 5_000_000;
@@ -20,6 +21,8 @@ export interface MonteCarloOptions<K extends string> {
   trials: number;
   /** Seed stored with the case, an integer (low 32 bits used); the same seed gives the same run. */
   seed: number;
+  /** Rank correlations between inputs (default none: independent inputs). */
+  correlations?: readonly InputCorrelation<K>[];
 }
 
 /** Result of {@link runMonteCarlo}. */
@@ -41,25 +44,37 @@ function checkTrialsSeed(fn: string, trials: number, seed: number): void {
 
 /**
  * Samples every input: each input has its own xoroshiro128+ stream seeded by
- * streamSeed(seed, name), drawn by inversion (one uniform per trial). Inputs are independent.
+ * streamSeed(seed, name), drawn by inversion (one uniform per trial). Inputs are independent
+ * unless `correlations` ties some of them (rank correlations through a Gaussian copula, see
+ * rank-correlation.ts); inputs in no correlation get the very samples of an independent run.
  *
- * @throws RangeError naming the input, e.g. 'sampleInputs: inputs.porosity.sd must be > 0 ...'
+ * @throws RangeError naming the input, e.g. 'sampleInputs: inputs.porosity.sd must be > 0 ...',
+ *   or the correlation entry, e.g. 'sampleInputs: correlations[0].rank must be ...'
  */
 export function sampleInputs<K extends string>(
   inputs: Readonly<Record<K, Distribution>>,
   trials: number,
   seed: number,
   fn = 'sampleInputs',
+  correlations: readonly InputCorrelation<NoInfer<K>>[] = [],
 ): Record<K, Float64Array> {
   checkTrialsSeed(fn, trials, seed);
   if (inputs === null || typeof inputs !== 'object') throw new RangeError(`${fn}: inputs must be an object of distributions`);
+  const names = Object.keys(inputs) as K[];
+  const fixed = new Set<string>(names.filter((k) => inputs[k]?.kind === 'fixed'));
+  checkCorrelations(correlations, names, fixed, fn);
+  const tied = new Set<string>(correlations.flatMap((c) => [c.a, c.b]));
+  // Correlated inputs need their uniforms side by side; the others share one buffer.
+  const own: Record<string, Float64Array> = {};
+  for (const name of names) if (tied.has(name)) own[name] = fillUniform(streamSeed(seed, name), new Float64Array(trials));
+  correlateUniforms(own, correlations, fn);
   const out = {} as Record<K, Float64Array>;
   const u = new Float64Array(trials);
-  for (const name of Object.keys(inputs) as K[]) {
+  for (const name of names) {
     const d = inputs[name];
     const x = new Float64Array(trials);
     if (d && d.kind === 'fixed') sampleDistribution(d, u, x, fn, `inputs.${name}`);
-    else sampleDistribution(d, fillUniform(streamSeed(seed, name), u), x, fn, `inputs.${name}`);
+    else sampleDistribution(d, own[name] ?? fillUniform(streamSeed(seed, name), u), x, fn, `inputs.${name}`);
     out[name] = x;
   }
   return out;
@@ -78,9 +93,9 @@ export function sampleInputs<K extends string>(
  *     model: (s) => s.a.map((v) => 2 * v), trials: 1000, seed: 42 })
  */
 export function runMonteCarlo<K extends string>(options: MonteCarloOptions<K>): MonteCarloRun<K> {
-  const { inputs, model, trials, seed } = options;
+  const { inputs, model, trials, seed, correlations } = options;
   if (typeof model !== 'function') throw new RangeError('runMonteCarlo: model must be a function');
-  const samples = sampleInputs(inputs, trials, seed, 'runMonteCarlo');
+  const samples = sampleInputs(inputs, trials, seed, 'runMonteCarlo', correlations);
   const output = model(samples, trials);
   if (!(output instanceof Float64Array) || output.length !== trials) {
     throw new RangeError(`runMonteCarlo: model must return a Float64Array of length trials (${trials})`);

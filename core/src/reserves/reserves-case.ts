@@ -2,6 +2,7 @@ import { type Distribution, checkDistribution, distributionQuantile } from './di
 import { type GasPvtResult, type ZFactorMethod, gasPvt } from './gas-fvf.js';
 import { type Histogram, histogram } from './histogram.js';
 import { sampleInputs } from './monte-carlo.js';
+import { type InputCorrelation, sampleRankCorrelation } from './rank-correlation.js';
 import {
   type ExceedanceCurve,
   type PrmsSummary,
@@ -52,6 +53,11 @@ export interface ReservesCaseInput {
   /** Gas PVT (gas cases). */
   gas?: ReservesGasInput;
   distributions?: Partial<Record<ReservesInputName, Distribution>>;
+  /**
+   * Rank (Spearman) correlations between uncertain inputs, e.g. porosity and Sw (default none:
+   * inputs drawn independently). See rank-correlation.ts.
+   */
+  correlations?: InputCorrelation<ReservesInputName>[];
   /** Monte Carlo settings; omit for a deterministic-only case. */
   monteCarlo?: { trials: number; seed: number; bins?: number; exceedancePoints?: number };
   /** What the other inputs hold in the tornado: their P50 (default) or the base values. */
@@ -107,6 +113,8 @@ export interface ReservesCaseResult {
     inputs: Record<ReservesInputName, Distribution>;
     /** Each input's P90/P50/P10 (from its distribution, exact) and sample mean, in its own units. */
     inputSummaries: Record<ReservesInputName, InputSummary>;
+    /** The rank correlations asked for, each with the rank correlation of the drawn samples. */
+    correlations: (InputCorrelation<ReservesInputName> & { sampled: number })[];
     inPlace: OutputDistribution;
     recoverable: OutputDistribution;
   };
@@ -119,6 +127,10 @@ export const RESERVES_DISCLAIMER =
   'Estimates only. Classification and reporting of reserves and resources follow the applicable rules ' +
   '(for example SPE-PRMS 2018 or the local regulator) and need sign-off by a qualified evaluator; ' +
   'defer to local codes and licensed practice.';
+
+/** Shown when inputs are correlated: the tornado moves one input at a time. */
+export const TORNADO_CORRELATION_NOTE =
+  'Correlated inputs: the Monte Carlo draws honour the rank correlations; the tornado still moves one input at a time with the others held, so it shows each input alone.';
 
 const FN = 'evaluateReservesCase';
 const NAMES: readonly ReservesInputName[] = ['area', 'netPay', 'porosity', 'sw', 'bo', 'recoveryFactor'];
@@ -249,7 +261,8 @@ export function evaluateReservesCase(input: ReservesCaseInput): ReservesCaseResu
     if (!NAMES.includes(k as ReservesInputName)) throw new RangeError(`${FN}: distributions.${k} is not a case input`);
   }
   const { trials, seed } = input.monteCarlo;
-  const s = sampleInputs(dists, trials, seed, FN);
+  const correlations = input.correlations ?? [];
+  const s = sampleInputs(dists, trials, seed, FN, correlations);
   const outIn = new Float64Array(trials);
   const outRec = new Float64Array(trials);
   const k0 = constant * areaAcresPerUnit * ftPerUnit;
@@ -293,11 +306,13 @@ export function evaluateReservesCase(input: ReservesCaseInput): ReservesCaseResu
       sampleMean: sum / trials,
     };
   }
+  if (correlations.length) notes.push(TORNADO_CORRELATION_NOTE);
   result.probabilistic = {
     trials,
     seed,
     inputs: dists,
     inputSummaries,
+    correlations: correlations.map((c) => ({ a: c.a, b: c.b, rank: c.rank, sampled: trials > 1 ? sampleRankCorrelation(s[c.a], s[c.b]) : Number.NaN })),
     inPlace: summarize(outIn, scalarIn),
     recoverable: summarize(outRec, scalarRec),
   };

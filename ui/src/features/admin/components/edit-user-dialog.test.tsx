@@ -64,12 +64,12 @@ describe('EditUserDialog', () => {
     expect(queryClient.getQueryState(membersQueryOptions('a2').queryKey)?.isInvalidated).toBe(false);
   });
 
-  it('resets the password with PATCH { password } and tells the admin to hand it over', async () => {
+  it('resets the password with PATCH { password } and says so in the row', async () => {
     const fetchMock = vi.fn(async () => jsonResponse(200, sam));
     vi.stubGlobal('fetch', fetchMock);
     renderWithProviders(<EditUserDialog user={sam} />);
     fillAndSave(open(), { password: 'a-fresh-password' });
-    expect((await screen.findByRole('status')).textContent).toContain('Hand it over safely');
+    expect((await screen.findByRole('status')).textContent).toBe('Password reset.');
     expect(sentBodies(fetchMock)).toEqual([['/api/users/u2', 'PATCH', { password: 'a-fresh-password' }]]);
   });
 

@@ -54,7 +54,7 @@ export function EditUserDialog({ user }: { user: UserAccount }) {
       { userId: user.id, ...input },
       {
         onSuccess: () => {
-          setSaved(input.password ? 'Saved; the new password works from now on. Hand it over safely.' : 'Saved.');
+          setSaved(input.password ? (input.name ? 'Saved; password reset.' : 'Password reset.') : 'Saved.');
           setOpen(false);
         },
         onError: (error) => {
@@ -122,7 +122,7 @@ export function EditUserDialog({ user }: { user: UserAccount }) {
                 </Callout.Root>
               ) : null}
               {field('name', 'text', 'off')}
-              {field('password', 'password', 'new-password', `Leave empty to keep the current password. At least ${MIN_PASSWORD_LENGTH} characters.`)}
+              {field('password', 'password', 'new-password', `Leave empty to keep the current password. At least ${MIN_PASSWORD_LENGTH} characters; hand it over safely.`)}
               <Flex gap="2" justify="end">
                 <Dialog.Close>
                   <Button type="button" variant="soft" color="gray">

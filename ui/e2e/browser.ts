@@ -14,10 +14,11 @@ export function launchChromium(): Promise<Browser> {
 /** Git-ignored folder for screenshots (look at them after a run). */
 export const screenshotDir = fileURLToPath(new URL('../../.screenshots', import.meta.url));
 
-export async function screenshot(page: Page, name: string): Promise<string> {
+/** The whole page by default; `fullPage: false` for the viewport only (an open dialog, which locks the page's scroll). */
+export async function screenshot(page: Page, name: string, { fullPage = true }: { fullPage?: boolean } = {}): Promise<string> {
   mkdirSync(screenshotDir, { recursive: true });
   const path = join(screenshotDir, `${name}.png`);
-  await page.screenshot({ path, fullPage: true });
+  await page.screenshot({ path, fullPage });
   return path;
 }
 

@@ -189,6 +189,17 @@ describe('routes', () => {
     expect(getToken()).toBeNull();
   });
 
+  it('takes a viewer from the shell to their account page, with the change-password form', async () => {
+    setToken('jwt-1');
+    stubService('viewer');
+    const router = renderAt('/assets');
+    fireEvent.click(within(await screen.findByRole('banner')).getByRole('link', { name: 'Your account' }));
+    expect(await screen.findByRole('heading', { name: 'Your account', level: 1 })).toBeTruthy();
+    expect(router.state.location.pathname).toBe('/account');
+    expect(screen.getByText('pat@example.test', { selector: 'main *' })).toBeTruthy();
+    expect(screen.getByRole('form', { name: 'Change password' })).toBeTruthy();
+  });
+
   it('signs out from the shell back to the sign-in page', async () => {
     setToken('jwt-1');
     stubService();

@@ -104,6 +104,13 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
               },
             },
             {
+              path: 'account',
+              lazy: async () => {
+                const { AccountRoute, accountLoader } = await import('./routes/account');
+                return { Component: AccountRoute, loader: accountLoader(queryClient) };
+              },
+            },
+            {
               path: 'admin',
               lazy: async () => {
                 const { AdminRoute, adminLoader } = await import('./routes/admin');

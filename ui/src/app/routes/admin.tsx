@@ -9,6 +9,7 @@ import { MembersPanel } from '../../features/admin/components/members-panel';
 import { NewUserForm } from '../../features/admin/components/new-user-form';
 import { UsersTable } from '../../features/admin/components/users-table';
 import { assetsQueryOptions, useAssets } from '../../features/assets/api/get-assets';
+import { EditAssetDialog } from '../../features/assets/components/edit-asset-dialog';
 import { NewAssetForm } from '../../features/assets/components/new-asset-form';
 import { useMe } from '../../features/auth/api/get-me';
 import { requireUser } from './require-user';
@@ -21,7 +22,7 @@ export const adminLoader =
     return null;
   };
 
-/** /admin: the organisation's people and assets, and who holds which role in each asset (organisation admins). */
+/** /admin: the organisation's people and assets (created, renamed, edited), and who holds which role in each asset (organisation admins). */
 export function AdminRoute() {
   const me = useMe();
   if (!me.data?.isAdmin) {
@@ -106,7 +107,7 @@ function AssetsSection() {
                 <Table.ColumnHeaderCell>Asset</Table.ColumnHeaderCell>
                 <Table.ColumnHeaderCell>Description</Table.ColumnHeaderCell>
                 <Table.ColumnHeaderCell>
-                  <span className="visually-hidden">Members</span>
+                  <span className="visually-hidden">Members and edit</span>
                 </Table.ColumnHeaderCell>
               </Table.Row>
             </Table.Header>
@@ -118,9 +119,12 @@ function AssetsSection() {
                     <Text color="gray">{a.description || '–'}</Text>
                   </Table.Cell>
                   <Table.Cell>
-                    <Button size="1" variant={a.id === chosen?.id ? 'solid' : 'soft'} aria-label={`Members of ${a.name}`} onClick={() => choose(a.id)}>
-                      Members
-                    </Button>
+                    <Flex gap="2" justify="end">
+                      <Button size="1" variant={a.id === chosen?.id ? 'solid' : 'soft'} aria-label={`Members of ${a.name}`} onClick={() => choose(a.id)}>
+                        Members
+                      </Button>
+                      <EditAssetDialog asset={a} />
+                    </Flex>
                   </Table.Cell>
                 </Table.Row>
               ))}

@@ -14,7 +14,7 @@ export const appLayoutLoader =
   ({ request }: LoaderFunctionArgs) =>
     requireUser(queryClient, request);
 
-/** The shell: product name, main navigation, the signed-in user with their role, sign out. */
+/** The shell: product name, main navigation, the signed-in user with their role, their account page, sign out. */
 export function AppLayout() {
   const me = useMe();
   const { assetId } = useParams();
@@ -60,6 +60,9 @@ export function AppLayout() {
                   {roleLabel(me.data, assetId)}
                 </Badge>
                 <Separator orientation="vertical" size="2" />
+                <NavLink to="/account" className="strong-link">
+                  Your account
+                </NavLink>
                 <Button variant="ghost" color="gray" onClick={signOut}>
                   Sign out
                 </Button>

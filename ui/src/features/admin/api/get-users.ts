@@ -1,5 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiJson } from '../../../lib/api-client';
+import { usersKey } from '../../../lib/query-keys';
 import type { UserAccount } from '../../../types/admin';
 
 /** GET /api/users: the accounts of the admin's organisation (global admin). */
@@ -9,7 +10,7 @@ export function getUsers(signal?: AbortSignal): Promise<UserAccount[]> {
 
 export function usersQueryOptions() {
   return queryOptions({
-    queryKey: ['users'] as const,
+    queryKey: usersKey,
     queryFn: ({ signal }) => getUsers(signal),
   });
 }

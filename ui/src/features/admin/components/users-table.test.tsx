@@ -27,6 +27,7 @@ describe('UsersTable', () => {
     expect(screen.getByText('admin (you)')).toBeTruthy();
     expect(screen.getByText('every asset, as admin')).toBeTruthy();
     expect(screen.getAllByText('none yet')).toHaveLength(1);
+    expect(screen.getAllByRole('button', { name: /^Edit / }).map((b) => b.getAttribute('aria-label'))).toEqual(['Edit Ari Viewer', 'Edit Lee Admin', 'Edit Sam Petro']);
   });
 
   it('sorts by e-mail when its header is clicked, reversed on the second click', () => {

@@ -13,6 +13,7 @@ import { useMemo, useState } from 'react';
 import { SortableHeaderCell } from '../../../components/sortable-header-cell';
 import type { UserAccount } from '../../../types/admin';
 import { useUpdateUser } from '../api/update-user';
+import { EditUserDialog } from './edit-user-dialog';
 
 const features = tableFeatures({
   rowSortingFeature,
@@ -53,6 +54,7 @@ function buildColumns(currentUserId: string) {
       sortFn: 'basic',
       cell: (info) => <AdminToggle user={info.row.original} isSelf={info.row.original.id === currentUserId} />,
     }),
+    helper.display({ id: 'edit', header: () => <span className="visually-hidden">Edit</span>, cell: (info) => <EditUserDialog user={info.row.original} /> }),
   ]);
 }
 
@@ -62,7 +64,7 @@ export interface UsersTableProps {
   currentUserId: string;
 }
 
-/** The organisation's accounts: who they are, which assets they hold a role in, and the admin flag (which can be switched). */
+/** The organisation's accounts: who they are, which assets they hold a role in, the admin flag (which can be switched), and an edit dialog (name, password reset). */
 export function UsersTable({ users, currentUserId }: UsersTableProps) {
   const columns = useMemo(() => buildColumns(currentUserId), [currentUserId]);
   const [sorting, setSorting] = useState<SortingState>([{ id: 'name', desc: false }]);
@@ -74,11 +76,17 @@ export function UsersTable({ users, currentUserId }: UsersTableProps) {
       <Table.Header>
         {table.getHeaderGroups().map((group) => (
           <Table.Row key={group.id}>
-            {group.headers.map((header) => (
-              <SortableHeaderCell key={header.id} sorted={header.column.getIsSorted()} onToggle={header.column.getToggleSortingHandler()} placeholder={header.isPlaceholder}>
-                <table.FlexRender header={header} />
-              </SortableHeaderCell>
-            ))}
+            {group.headers.map((header) =>
+              header.column.getCanSort() ? (
+                <SortableHeaderCell key={header.id} sorted={header.column.getIsSorted()} onToggle={header.column.getToggleSortingHandler()} placeholder={header.isPlaceholder}>
+                  <table.FlexRender header={header} />
+                </SortableHeaderCell>
+              ) : (
+                <Table.ColumnHeaderCell key={header.id}>
+                  <table.FlexRender header={header} />
+                </Table.ColumnHeaderCell>
+              ),
+            )}
           </Table.Row>
         ))}
       </Table.Header>

@@ -1,5 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiJson } from '../../../lib/api-client';
+import { meKey } from '../../../lib/query-keys';
 import type { Me } from '../../../types/api';
 
 /** GET /api/auth/me: the signed-in user and their asset memberships. */
@@ -9,7 +10,7 @@ export function getMe(signal?: AbortSignal): Promise<Me> {
 
 export function meQueryOptions() {
   return queryOptions({
-    queryKey: ['auth', 'me'] as const,
+    queryKey: meKey,
     queryFn: ({ signal }) => getMe(signal),
     staleTime: 5 * 60_000,
   });

@@ -1,0 +1,113 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Button, Callout, Flex, Heading, Text, TextField } from '@radix-ui/themes';
+import { useId } from 'react';
+import { useForm } from 'react-hook-form';
+import { z } from 'zod';
+import { serverFieldErrors } from '../../../lib/server-field-errors';
+import { useChangePassword } from '../api/change-password';
+
+/** The service's rule for every account password. */
+const MIN_PASSWORD_LENGTH = 12;
+
+const LABELS = { currentPassword: 'Current password', newPassword: 'New password', confirmPassword: 'New password again' } as const;
+
+type Field = keyof typeof LABELS;
+
+const changePasswordSchema = z
+  .object({
+    currentPassword: z.string().min(1, { error: 'Enter your current password.' }),
+    newPassword: z
+      .string()
+      .min(MIN_PASSWORD_LENGTH, { error: `The new password needs at least ${MIN_PASSWORD_LENGTH} characters.` })
+      .max(200, { error: 'A password is at most 200 characters.' }),
+    confirmPassword: z.string(),
+  })
+  .refine((v) => v.confirmPassword === v.newPassword, { path: ['confirmPassword'], error: 'The two new passwords differ; type the same one twice.' })
+  .refine((v) => !v.currentPassword || v.newPassword !== v.currentPassword, { path: ['newPassword'], error: 'The new password must differ from the current one.' });
+
+type ChangePasswordValues = z.infer<typeof changePasswordSchema>;
+
+const EMPTY: ChangePasswordValues = { currentPassword: '', newPassword: '', confirmPassword: '' };
+
+/**
+ * The signed-in user changes their own password. The service checks the current one; its
+ * refusals show under the field they name. The session stays signed in afterwards.
+ */
+export function ChangePasswordForm() {
+  const id = useId();
+  const change = useChangePassword();
+  const {
+    register,
+    handleSubmit,
+    reset,
+    setError,
+    formState: { errors },
+  } = useForm<ChangePasswordValues>({ resolver: zodResolver(changePasswordSchema), defaultValues: EMPTY });
+
+  const onSubmit = handleSubmit(({ currentPassword, newPassword }) => {
+    change.mutate(
+      { currentPassword, newPassword },
+      {
+        onSuccess: () => reset(EMPTY),
+        onError: (error) => {
+          const { fields } = serverFieldErrors(error, LABELS);
+          for (const [field, message] of Object.entries(fields) as [Field, string][]) setError(field, { type: 'server', message });
+        },
+      },
+    );
+  });
+  const other = change.error ? serverFieldErrors(change.error, LABELS).other : [];
+
+  const field = (name: Field, autoComplete: string, hint?: string) => (
+    <Flex direction="column" gap="1">
+      <Text as="label" htmlFor={`${id}-${name}`} size="2" weight="medium">
+        {LABELS[name]}
+      </Text>
+      <TextField.Root
+        id={`${id}-${name}`}
+        type="password"
+        autoComplete={autoComplete}
+        aria-invalid={errors[name] ? true : undefined}
+        aria-describedby={errors[name] ? `${id}-${name}-error` : hint ? `${id}-${name}-hint` : undefined}
+        {...register(name)}
+      />
+      {errors[name] ? (
+        <Text id={`${id}-${name}-error`} size="1" color="tomato">
+          {errors[name].message}
+        </Text>
+      ) : hint ? (
+        <Text id={`${id}-${name}-hint`} size="1" color="gray">
+          {hint}
+        </Text>
+      ) : null}
+    </Flex>
+  );
+
+  return (
+    <form onSubmit={onSubmit} noValidate aria-labelledby={`${id}-title`}>
+      <Flex direction="column" gap="3" maxWidth="380px">
+        <Heading as="h2" size="4" id={`${id}-title`}>
+          Change password
+        </Heading>
+        {other.length ? (
+          <Callout.Root color="tomato" size="1" role="alert">
+            <Callout.Text>{other.join(' ')}</Callout.Text>
+          </Callout.Root>
+        ) : null}
+        {change.isSuccess ? (
+          <Text size="1" color="jade" role="status">
+            Password changed. Use the new one the next time you sign in.
+          </Text>
+        ) : null}
+        {field('currentPassword', 'current-password')}
+        {field('newPassword', 'new-password', `At least ${MIN_PASSWORD_LENGTH} characters.`)}
+        {field('confirmPassword', 'new-password')}
+        <Flex justify="end">
+          <Button type="submit" loading={change.isPending}>
+            Change password
+          </Button>
+        </Flex>
+      </Flex>
+    </form>
+  );
+}

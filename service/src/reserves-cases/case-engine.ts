@@ -162,6 +162,8 @@ export interface ProbabilisticResult {
   /** Each input's distribution as used (absent ones fixed at the deterministic value). */
   distributions: Record<InputName, Distribution>;
   inputSummaries: Record<InputName, InputSummary>;
+  /** Rank correlations asked for, each with the rank correlation of the drawn samples (older runs: absent). */
+  correlations?: { a: InputName; b: InputName; rank: number; sampled: number }[];
   /** Lognormal inputs in both forms (mean/sd and P90/P10), converted. */
   lognormals: Partial<Record<InputName, LognormalSummary>>;
   inPlace: OutputStats;
@@ -189,7 +191,9 @@ export function caseConventions(inputs: CaseInputs): string[] {
     'Lognormal inputs may be given by mean and standard deviation or by P90 and P10; both forms are shown.',
     'Metric volumes: 1 bbl = 0.158987294928 m3, 1 ft3 = 0.028316846592 m3 (NIST SP 811); gas m3 stay at the scf standard conditions.',
     'Tornado: each input at its P90 and its P10 in turn, the other inputs at the deterministic values.',
-    'Inputs are sampled independently (no correlation); a gas case holds Bg fixed at its PVT value.',
+    inputs.correlations.length
+      ? `Inputs are sampled independently except the rank correlations given (${inputs.correlations.map((c) => `${c.a}~${c.b} ${c.rank}`).join(', ')}), drawn through a Gaussian copula (rho = 2 sin(pi rho_s / 6), Kruskal 1958); a gas case holds Bg fixed at its PVT value.`
+      : 'Inputs are sampled independently (no correlation given); a gas case holds Bg fixed at its PVT value.',
   ];
 }
 
@@ -253,6 +257,7 @@ export function runCase(sources: readonly SourceSnapshot[], inputs: CaseInputs, 
       bo: inputs.fluid === 'oil' ? inputs.bo! : undefined,
       gas: inputs.fluid === 'gas' ? { ...inputs.gas!, standard: inputs.standard } : undefined,
       distributions,
+      correlations: inputs.correlations,
       monteCarlo: { trials: inputs.trials, seed },
       tornadoBase: 'base',
     });
@@ -291,6 +296,7 @@ export function runCase(sources: readonly SourceSnapshot[], inputs: CaseInputs, 
       seed: p.seed,
       distributions: p.inputs,
       inputSummaries: p.inputSummaries,
+      correlations: p.correlations,
       lognormals,
       inPlace: outputStats(p.inPlace),
       recoverable: outputStats(p.recoverable),

@@ -137,6 +137,15 @@ export async function buildCaseWorkbook(dto: ReservesCaseDto, cross: CrossCheckT
     inp.addRow(['z-factor method', inputs.gas.zMethod === 'dak' ? 'Dranchuk & Abou-Kassem (1975)' : 'Hall & Yarborough (1973)']);
   }
   inp.addRow(['Trials', inputs.trials]);
+  inp.addRow([]);
+  heading(inp, 'Rank correlations between inputs (Spearman; none = drawn independently)');
+  header(inp, ['Input', 'With', 'Rank correlation asked', 'Rank correlation of the samples']);
+  const sampled = results?.probabilistic.correlations ?? [];
+  for (const c of inputs.correlations) {
+    const got = sampled.find((x) => x.a === c.a && x.b === c.b);
+    inp.addRow([INPUT_LABELS[c.a], INPUT_LABELS[c.b], c.rank, got ? got.sampled : 'run the case']);
+  }
+  if (!inputs.correlations.length) inp.addRow(['(none)']);
 
   // Deterministic
   const det = wb.addWorksheet('Deterministic');

@@ -1,5 +1,5 @@
 import { BadRequestException } from '@nestjs/common';
-import type { Distribution, ReservesInputName } from '@poreline/core';
+import { MAX_RANK_CORRELATION, type Distribution, type InputCorrelation, type ReservesInputName } from '@poreline/core';
 import { z } from 'zod';
 
 /**
@@ -56,6 +56,8 @@ export interface CaseInputs {
   standard: { pressurePsia: number; temperatureF: number };
   /** One distribution per input (Bo for oil only; a gas case's Bg comes from PVT and is fixed); absent = fixed at the deterministic value. */
   distributions: Partial<Record<InputName, Distribution>>;
+  /** Rank (Spearman) correlations between inputs that have distributions; none = independent. */
+  correlations: InputCorrelation<InputName>[];
   trials: number;
   /** Decline fits kept with the case, per production series id. */
   declineChecks: Record<string, DeclineCheck>;
@@ -78,6 +80,7 @@ export function defaultInputs(): CaseInputs {
     recoveryFactor: null,
     standard: { pressurePsia: 14.696, temperatureF: 60 },
     distributions: {},
+    correlations: [],
     trials: 100_000,
     declineChecks: {},
   };
@@ -146,6 +149,21 @@ const patchSchema = z
         recoveryFactor: distribution.optional(),
       })
       .strict(),
+    correlations: z
+      .array(
+        z
+          .object({
+            a: z.enum(['area', 'netPay', 'porosity', 'sw', 'bo', 'recoveryFactor'], { error: 'a must be area, netPay, porosity, sw, bo or recoveryFactor' }),
+            b: z.enum(['area', 'netPay', 'porosity', 'sw', 'bo', 'recoveryFactor'], { error: 'b must be area, netPay, porosity, sw, bo or recoveryFactor' }),
+            rank: num('rank')
+              .min(-MAX_RANK_CORRELATION, { error: `rank must be in [-${MAX_RANK_CORRELATION}, ${MAX_RANK_CORRELATION}]` })
+              .max(MAX_RANK_CORRELATION, { error: `rank must be in [-${MAX_RANK_CORRELATION}, ${MAX_RANK_CORRELATION}]` }),
+          })
+          .strict()
+          .refine((c) => c.a !== c.b, { error: 'a and b must be two different inputs' }),
+        { error: 'correlations must be a list of { a, b, rank }' },
+      )
+      .max(15, { error: 'correlations: at most 15 pairs (every pair of the six inputs)' }),
     trials: z
       .number({ error: 'trials must be a number' })
       .int({ error: 'trials must be an integer' })

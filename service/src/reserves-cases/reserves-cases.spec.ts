@@ -222,6 +222,29 @@ describe('reserves cases: sources, overrides, runs, review and export', () => {
     expect(run2.body.results.probabilistic.inPlace.mean).toBe(run1.body.results.probabilistic.inPlace.mean);
   });
 
+  it('rank correlations: kept with the inputs, drawn on run (sampled value reported, stated in the conventions), refused naming the entry', async () => {
+    const copy = await t.http.post(`${base()}/${caseId}/copy`).set('Authorization', await t.tokenFor('engineer'));
+    const url = `${base()}/${copy.body.id}`;
+    const bad = await t.http.patch(url).set('Authorization', await t.tokenFor('engineer')).send({ inputs: { correlations: [{ a: 'sw', b: 'sw', rank: 0.3 }, { a: 'porosity', b: 'sw', rank: 1.2 }] } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.message).toEqual(expect.arrayContaining(['inputs.correlations.0: a and b must be two different inputs', 'inputs.correlations.1.rank: rank must be in [-0.99, 0.99]']));
+    const ok = await t.http.patch(url).set('Authorization', await t.tokenFor('engineer')).send({ inputs: { correlations: [{ a: 'porosity', b: 'sw', rank: -0.6 }], trials: 50_000 } });
+    expect(ok.status).toBe(200);
+    expect(ok.body.inputs.correlations).toEqual([{ a: 'porosity', b: 'sw', rank: -0.6 }]);
+    const run = await t.http.post(`${url}/run`).set('Authorization', await t.tokenFor('engineer'));
+    expect(run.status, JSON.stringify(run.body.message)).toBe(200);
+    const [c] = run.body.results.probabilistic.correlations;
+    expect(c).toMatchObject({ a: 'porosity', b: 'sw', rank: -0.6 });
+    // sampling error of a Spearman correlation at n = 50,000: about (1 - rho^2) / sqrt(n) = 0.003 (common practice)
+    expect(Math.abs(c.sampled + 0.6)).toBeLessThan(0.015);
+    expect(run.body.results.conventions.join(' ')).toMatch(/porosity~sw -0.6.*Kruskal 1958/);
+    // a correlation with an input that has no distribution is refused on run, naming it
+    await t.http.patch(url).set('Authorization', await t.tokenFor('engineer')).send({ inputs: { correlations: [{ a: 'bo', b: 'sw', rank: 0.2 }] } }).expect(200);
+    const refused = await t.http.post(`${url}/run`).set('Authorization', await t.tokenFor('engineer'));
+    expect(refused.status).toBe(400);
+    expect(JSON.stringify(refused.body.message)).toMatch(/correlations\[0\]\.a: bo is fixed; give it a distribution/);
+  });
+
   it('an unbounded normal porosity is refused on run with a message naming the input', async () => {
     const copy = await t.http.post(`${base()}/${caseId}/copy`).set('Authorization', await t.tokenFor('engineer'));
     expect(copy.status).toBe(201);
@@ -338,6 +361,11 @@ describe('reserves cases: sources, overrides, runs, review and export', () => {
     expect(String(summary.getRow(2).getCell(2).value)).toMatch(/SPE-PRMS/);
     const sources = wb.getWorksheet('Sources')!;
     expect(sources.getRow(2).getCell(1).value).toBe('RC-A');
+    const inputsSheet = wb.getWorksheet('Inputs')!;
+    const cells: string[] = [];
+    inputsSheet.eachRow((row) => row.eachCell((cell) => cells.push(String(cell.value))));
+    expect(cells).toContain('Rank correlations between inputs (Spearman; none = drawn independently)');
+    expect(cells).toContain('(none)');
     const prob = wb.getWorksheet('Probabilistic')!;
     const p90 = prob.getRow(3);
     expect(p90.getCell(1).value).toBe('P90');

@@ -18,6 +18,7 @@ export function oilInputs(): CaseInputs {
     standard: { pressurePsia: 14.696, temperatureF: 60 },
     distributions: { area: { kind: 'triangular', min: 480, mode: 640, max: 900 }, sw: { kind: 'uniform', min: 0.2, max: 0.32 } },
     trials: 5000,
+    correlations: [],
     declineChecks: {},
   };
 }
@@ -34,6 +35,7 @@ export function resultsFor(inputs: CaseInputs, seed = 7): CaseResults {
     recoveryFactor: inputs.recoveryFactor!,
     bo: inputs.bo!,
     distributions: inputs.distributions,
+    correlations: inputs.correlations,
     monteCarlo: { trials: inputs.trials, seed },
     tornadoBase: 'base',
   });
@@ -62,7 +64,7 @@ export function resultsFor(inputs: CaseInputs, seed = 7): CaseResults {
       recoverable: { field: r.deterministic.recoverable.field, fieldUnit: 'STB', m3: r.deterministic.recoverable.metric },
       formula: 'N [STB] = 7758.37 A h phi (1 - Sw) / Bo',
     },
-    probabilistic: { trials: p.trials, seed: p.seed, distributions: p.inputs, inputSummaries: p.inputSummaries, lognormals: {}, inPlace: out(p.inPlace), recoverable: out(p.recoverable), elapsedMs: 12 },
+    probabilistic: { trials: p.trials, seed: p.seed, distributions: p.inputs, inputSummaries: p.inputSummaries, correlations: p.correlations, lognormals: {}, inPlace: out(p.inPlace), recoverable: out(p.recoverable), elapsedMs: 12 },
     notes: r.notes,
     conventions: ['Standard conditions: 14.696 psia and 60 F.'],
   };

@@ -45,8 +45,16 @@ export interface CaseInputs {
   recoveryFactor: number | null;
   standard: { pressurePsia: number; temperatureF: number };
   distributions: Partial<Record<InputName, Distribution>>;
+  /** Rank (Spearman) correlations between inputs with distributions; none = independent. */
+  correlations: InputCorrelation[];
   trials: number;
   declineChecks: Record<string, DeclineCheck>;
+}
+
+export interface InputCorrelation {
+  a: InputName;
+  b: InputName;
+  rank: number;
 }
 
 /** A partial update of the inputs: each key given replaces that key. Overrides are sent without by/at. */
@@ -148,6 +156,8 @@ export interface CaseResults {
     seed: number;
     distributions: Record<InputName, Distribution>;
     inputSummaries: Record<InputName, InputSummary>;
+    /** The rank correlations asked for, with the rank correlation of the drawn samples (runs before correlations existed: absent). */
+    correlations?: (InputCorrelation & { sampled: number })[];
     lognormals: Partial<Record<InputName, LognormalSummary>>;
     inPlace: OutputStats;
     recoverable: OutputStats;

@@ -2,7 +2,7 @@ import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { setToken } from '../../../lib/auth-token';
 import { jsonResponse, renderWithProviders } from '../../../test/render';
-import { reservesCase } from '../../../test/reserves-fixture';
+import { oilInputs, reservesCase, resultsFor } from '../../../test/reserves-fixture';
 import { CaseEditor } from './case-editor';
 
 describe('CaseEditor', () => {
@@ -62,5 +62,33 @@ describe('CaseEditor', () => {
     const [url, init] = fetchMock.mock.calls[0] as unknown as [string, RequestInit];
     expect(url).toBe('/api/assets/a1/reserves-cases/c1/return');
     expect(JSON.parse(String(init.body))).toEqual({ comment: 'Explain RF' });
+  });
+
+  it('correlated inputs: the results say what was asked and drawn; the inputs tab adds a pair and saves it', async () => {
+    const inputs = { ...oilInputs(), correlations: [{ a: 'area' as const, b: 'sw' as const, rank: 0.4 }] };
+    const withPair = reservesCase({ inputs, results: resultsFor(inputs) });
+    const { unmount } = renderWithProviders(<CaseEditor assetId="a1" reservesCase={withPair} canEdit canReview={false} />);
+    const note = screen.getByRole('note', { name: 'Correlated inputs' });
+    expect(note.textContent).toMatch(/Area with Sw 0\.40, drawn 0\.[34]\d\d/);
+    unmount();
+
+    const fetchMock = vi.fn(async (_url: string, init?: RequestInit) => jsonResponse(200, reservesCase({ inputs: { ...oilInputs(), ...JSON.parse(String(init?.body)).inputs } })));
+    vi.stubGlobal('fetch', fetchMock);
+    renderWithProviders(<CaseEditor assetId="a1" reservesCase={reservesCase()} canEdit canReview={false} />);
+    fireEvent.mouseDown(screen.getByRole('tab', { name: /Sources and inputs/ }));
+    fireEvent.click(screen.getByRole('tab', { name: /Sources and inputs/ }));
+    fireEvent.click(await screen.findByRole('button', { name: 'Add a correlation' }));
+    expect((screen.getByLabelText('Correlation 1: first input') as HTMLSelectElement).value).toBe('area');
+    expect((screen.getByLabelText('Correlation 1: second input') as HTMLSelectElement).value).toBe('sw');
+    fireEvent.change(screen.getByLabelText('Correlation 1: rank correlation'), { target: { value: '1.3' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save inputs' }));
+    expect(await screen.findByText('Rank correlation must be a number from -0.99 to 0.99.')).toBeTruthy();
+    expect(fetchMock).not.toHaveBeenCalled();
+    fireEvent.change(screen.getByLabelText('Correlation 1: rank correlation'), { target: { value: '-0.3' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save inputs' }));
+    await waitFor(() => expect(fetchMock).toHaveBeenCalled());
+    const [url, init] = fetchMock.mock.calls[0] as unknown as [string, RequestInit];
+    expect(url).toBe('/api/assets/a1/reserves-cases/c1');
+    expect(JSON.parse(String(init.body)).inputs.correlations).toEqual([{ a: 'area', b: 'sw', rank: -0.3 }]);
   });
 });

@@ -9,6 +9,7 @@ import { useUpdateReservesCase } from '../api/update-reserves-case';
 import { formatSig } from '../utils/format-volume';
 import { INPUT_ORDER, formValuesOf, inputsFormSchema, patchOf, scaleDistributionForm, type InputsFormValues } from '../utils/inputs-form';
 import { inputLabel, inputUnit } from '../utils/labels';
+import { CorrelationsEditor } from './correlations-editor';
 import { DistributionRow } from './distribution-editor';
 
 const ACRES_PER_KM2 = 1e6 / 4046.8564224; // NIST SP 811 acre
@@ -59,6 +60,7 @@ export function CaseInputsForm({ assetId, reservesCase: c, editable, onRan }: Ca
     watch,
     getValues,
     setValue,
+    control,
     formState: { errors, isDirty },
   } = useForm<InputsFormValues>({ resolver: zodResolver(inputsFormSchema), defaultValues: formValuesOf(c.inputs, c.seed) });
   useEffect(() => reset(formValuesOf(c.inputs, c.seed)), [c.id, c.revision, c.inputs, c.seed, reset]);
@@ -199,7 +201,7 @@ export function CaseInputsForm({ assetId, reservesCase: c, editable, onRan }: Ca
           Distributions for Monte Carlo
         </Heading>
         <Text size="1" color="gray">
-          Each input is sampled independently. An input left fixed keeps its deterministic (base) value. P90 is the low value (exceeded with 90 % probability).
+          Inputs are sampled independently unless correlated below. An input left fixed keeps its deterministic (base) value. P90 is the low value (exceeded with 90 % probability).
         </Text>
         <Table.Root variant="surface" size="1">
           <caption className="visually-hidden">Input distributions</caption>
@@ -229,6 +231,17 @@ export function CaseInputsForm({ assetId, reservesCase: c, editable, onRan }: Ca
             ))}
           </Table.Body>
         </Table.Root>
+        <Heading as="h3" size="3">
+          Correlated inputs
+        </Heading>
+        <CorrelationsEditor
+          control={control}
+          register={register}
+          errors={errors}
+          uncertain={INPUT_ORDER.filter((n) => v.dist[n].kind !== 'base')}
+          labelOf={(n) => inputLabel(n, v.fluid)}
+          disabled={disabled}
+        />
         {error ? (
           <Callout.Root color="tomato" size="1" role="alert">
             <Callout.Text>{error.message}</Callout.Text>

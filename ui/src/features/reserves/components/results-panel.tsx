@@ -117,6 +117,13 @@ export function ResultsPanel({ reservesCase: c }: { reservesCase: ReservesCase }
               ))}
             </Table.Body>
           </Table.Root>
+          {r.probabilistic.correlations?.length ? (
+            <Text size="1" color="gray" role="note" aria-label="Correlated inputs">
+              Correlated inputs (rank correlation asked, then drawn):{' '}
+              {r.probabilistic.correlations.map((x) => `${inputLabel(x.a, fluid)} with ${inputLabel(x.b, fluid)} ${x.rank.toFixed(2)}, drawn ${x.sampled.toFixed(3)}`).join('; ')}. The
+              tornado moves one input at a time, so it shows each input alone.
+            </Text>
+          ) : null}
           {Object.keys(r.probabilistic.lognormals).length ? (
             <Text size="1" color="gray">
               Lognormal inputs in both forms:{' '}

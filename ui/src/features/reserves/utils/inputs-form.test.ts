@@ -16,6 +16,7 @@ const inputs: CaseInputs = {
   recoveryFactor: 0.3,
   standard: { pressurePsia: 14.696, temperatureF: 60 },
   distributions: { area: { kind: 'triangular', min: 480, mode: 640, max: 900 } },
+  correlations: [],
   trials: 100000,
   declineChecks: {},
 };
@@ -44,5 +45,34 @@ describe('case inputs form', () => {
     expect(Number(f.a)).toBeCloseTo(0.40468564224, 9);
     expect(f.b).toBe('');
     expect(Number(f.truncMax)).toBeCloseTo(1.21405692672, 9);
+  });
+
+  it('rank correlations: round-trip to the PATCH body; each problem named on its row and field', () => {
+    const withDists: CaseInputs = {
+      ...inputs,
+      distributions: { ...inputs.distributions, porosity: { kind: 'uniform', min: 0.15, max: 0.25 }, sw: { kind: 'uniform', min: 0.2, max: 0.4 } },
+      correlations: [{ a: 'porosity', b: 'sw', rank: -0.6 }],
+    };
+    const values = formValuesOf(withDists, 1);
+    expect(values.correlations).toEqual([{ a: 'porosity', b: 'sw', rank: '-0.6' }]);
+    expect(inputsFormSchema.safeParse(values).success).toBe(true);
+    expect(patchOf(values).inputs.correlations).toEqual([{ a: 'porosity', b: 'sw', rank: -0.6 }]);
+
+    const bad = {
+      ...values,
+      correlations: [
+        { a: 'porosity' as const, b: 'sw' as const, rank: '1.5' },
+        { a: 'sw' as const, b: 'sw' as const, rank: '0.2' },
+        { a: 'sw' as const, b: 'porosity' as const, rank: '0.1' },
+        { a: 'bo' as const, b: 'area' as const, rank: '0.3' },
+      ],
+    };
+    const r = inputsFormSchema.safeParse(bad);
+    expect(r.success).toBe(false);
+    const byPath = Object.fromEntries(r.error!.issues.map((i) => [i.path.join('.'), i.message]));
+    expect(byPath['correlations.0.rank']).toMatch(/from -0.99 to 0.99/);
+    expect(byPath['correlations.1.b']).toMatch(/two different inputs/);
+    expect(byPath['correlations.2.b']).toMatch(/already correlated/);
+    expect(byPath['correlations.3.a']).toMatch(/Give this input a distribution first/);
   });
 });

@@ -26,7 +26,18 @@ export interface InputsFormValues {
   trials: string;
   seed: string;
   dist: Record<InputName, DistributionForm>;
+  /** Rank correlations as typed. */
+  correlations: CorrelationForm[];
 }
+
+export interface CorrelationForm {
+  a: InputName;
+  b: InputName;
+  rank: string;
+}
+
+/** Largest |rank correlation| the service accepts. */
+export const MAX_RANK = 0.99;
 
 const s = (n: number | null | undefined) => (n === null || n === undefined ? '' : String(n));
 const num = (v: string) => Number(v.trim());
@@ -51,6 +62,7 @@ export function formValuesOf(inputs: CaseInputs, seed: number): InputsFormValues
     trials: String(inputs.trials),
     seed: String(seed),
     dist,
+    correlations: (inputs.correlations ?? []).map((c) => ({ a: c.a, b: c.b, rank: String(c.rank) })),
   };
 }
 
@@ -78,6 +90,7 @@ export const inputsFormSchema = z
     trials: text,
     seed: text,
     dist: z.object({ area: distForm, netPay: distForm, porosity: distForm, sw: distForm, bo: distForm, recoveryFactor: distForm }),
+    correlations: z.array(z.object({ a: z.enum(INPUT_ORDER as [InputName, ...InputName[]]), b: z.enum(INPUT_ORDER as [InputName, ...InputName[]]), rank: text })),
   })
   .superRefine((v, ctx) => {
     check(ctx, ['area'], blank(v.area) || num(v.area) > 0, 'Area must be a number > 0.');
@@ -97,6 +110,18 @@ export const inputsFormSchema = z
       const errors = distributionFormErrors(v.dist[k]);
       for (const [field, message] of Object.entries(errors)) ctx.addIssue({ code: 'custom', path: ['dist', k, field], message });
     }
+    const pairs = new Set<string>();
+    v.correlations.forEach((c, i) => {
+      const r = num(c.rank);
+      check(ctx, ['correlations', i, 'rank'], !blank(c.rank) && Number.isFinite(r) && Math.abs(r) <= MAX_RANK, `Rank correlation must be a number from -${MAX_RANK} to ${MAX_RANK}.`);
+      check(ctx, ['correlations', i, 'b'], c.a !== c.b, 'Pick two different inputs.');
+      for (const side of ['a', 'b'] as const) {
+        check(ctx, ['correlations', i, side], v.dist[c[side]].kind !== 'base', 'Give this input a distribution first: a fixed input cannot be correlated.');
+      }
+      const key = [c.a, c.b].sort().join('~');
+      check(ctx, ['correlations', i, 'b'], !pairs.has(key), 'This pair is already correlated above.');
+      pairs.add(key);
+    });
   });
 
 /** The PATCH body of valid form values (seed is a top-level field of the case). */
@@ -121,6 +146,7 @@ export function patchOf(v: InputsFormValues): { inputs: CaseInputsPatch; seed: n
       recoveryFactor: opt(v.recoveryFactor),
       standard: { pressurePsia: num(v.stdPressure), temperatureF: num(v.stdTemperature) },
       distributions,
+      correlations: v.correlations.map((c) => ({ a: c.a, b: c.b, rank: num(c.rank) })),
       trials: num(v.trials),
     },
     seed: num(v.seed),

@@ -70,6 +70,11 @@ describe('reserves in Chromium: an engineer builds a case from approved net pay,
     await page.getByLabel('Porosity SD').fill('0.015');
     await page.getByLabel('Porosity truncate min').fill('0.17');
     await page.getByLabel('Porosity truncate max').fill('0.27');
+    // better rock, better sweep: porosity and recovery factor move together (rank 0.4)
+    await page.getByRole('button', { name: 'Add a correlation' }).click();
+    await page.getByLabel('Correlation 1: first input').selectOption('porosity');
+    await page.getByLabel('Correlation 1: second input').selectOption('recoveryFactor');
+    await page.getByLabel('Correlation 1: rank correlation').fill('0.4');
     await screenshot(page, 'reserves-case-inputs');
     await page.getByRole('button', { name: 'Run', exact: true }).click();
 
@@ -81,6 +86,7 @@ describe('reserves in Chromium: an engineer builds a case from approved net pay,
     await page.getByRole('heading', { name: /Monte Carlo: 100,000 trials/ }).waitFor({ state: 'visible' }); // fails the test when it does not show
     await page.getByRole('img', { name: /histogram of 100000 trials/ }).waitFor({ state: 'visible' });
     await page.getByRole('img', { name: /Tornado of Recoverable/ }).waitFor({ state: 'visible' });
+    expect(await page.getByRole('note', { name: 'Correlated inputs' }).textContent()).toMatch(/Porosity with Recovery factor 0\.40, drawn 0\.[34]\d\d/);
     await screenshot(page, 'reserves-case-results');
 
     // XLSX export: the workbook carries the caution and the same P90
@@ -94,6 +100,7 @@ describe('reserves in Chromium: an engineer builds a case from approved net pay,
     expect(prob.getRow(3).getCell(1).value).toBe('P90');
     expect(Number(prob.getRow(3).getCell(4).value)).toBeCloseTo(pct.p90, 3);
     expect(JSON.stringify(wb.getWorksheet('Inputs')!.getSheetValues())).toMatch(/Core Sw from the plug set/);
+    expect(JSON.stringify(wb.getWorksheet('Inputs')!.getSheetValues())).toMatch(/"Porosity \(fraction\)","Recovery factor \(fraction\)",0\.4,0\.[34]\d*/);
 
     // a plot as PNG, drawn in the browser
     const [png] = await Promise.all([

@@ -20,6 +20,7 @@ import {
 } from '@poreline/core';
 import { INPUT_NAMES, type CaseInputs, type InputName, type Overridable, type WellOverridable } from './case-inputs.js';
 import type { SourceSnapshot } from './source-values.js';
+import { INPUT_LABELS } from './input-labels.js';
 
 /**
  * The computation of a reserves case, pure: per-well values (with overrides) combined by the
@@ -192,7 +193,7 @@ export function caseConventions(inputs: CaseInputs): string[] {
     'Metric volumes: 1 bbl = 0.158987294928 m3, 1 ft3 = 0.028316846592 m3 (NIST SP 811); gas m3 stay at the scf standard conditions.',
     'Tornado: each input at its P90 and its P10 in turn, the other inputs at the deterministic values.',
     inputs.correlations.length
-      ? `Inputs are sampled independently except the rank correlations given (${inputs.correlations.map((c) => `${c.a}~${c.b} ${c.rank}`).join(', ')}), drawn through a Gaussian copula (rho = 2 sin(pi rho_s / 6), Kruskal 1958); a gas case holds Bg fixed at its PVT value.`
+      ? `Inputs are sampled independently except the rank correlations given (${inputs.correlations.map((c) => `${INPUT_LABELS[c.a]} with ${INPUT_LABELS[c.b]}: ${c.rank}`).join('; ')}), drawn through a Gaussian copula (rho = 2 sin(pi rho_s / 6), Kruskal 1958); a gas case holds Bg fixed at its PVT value.`
       : 'Inputs are sampled independently (no correlation given); a gas case holds Bg fixed at its PVT value.',
   ];
 }

@@ -1,6 +1,7 @@
 import ExcelJS from 'exceljs';
 import type { CaseAuditEntryDto, ReservesCaseDto } from './dto/reserves-case.dto.js';
 import { INPUT_NAMES, type InputName } from './case-inputs.js';
+import { INPUT_LABELS } from './input-labels.js';
 
 /** Cross-check tables written to the case export (filled by the production feature). */
 export interface PzTable {
@@ -38,14 +39,6 @@ export interface CrossCheckTables {
   decline: DeclineTable[];
 }
 
-const INPUT_LABELS: Record<InputName, string> = {
-  area: 'Area',
-  netPay: 'Net pay',
-  porosity: 'Porosity (fraction)',
-  sw: 'Sw (fraction)',
-  bo: 'Formation volume factor (Bo or Bg)',
-  recoveryFactor: 'Recovery factor (fraction)',
-};
 
 function heading(ws: ExcelJS.Worksheet, text: string): void {
   const row = ws.addRow([text]);

@@ -237,7 +237,7 @@ describe('reserves cases: sources, overrides, runs, review and export', () => {
     expect(c).toMatchObject({ a: 'porosity', b: 'sw', rank: -0.6 });
     // sampling error of a Spearman correlation at n = 50,000: about (1 - rho^2) / sqrt(n) = 0.003 (common practice)
     expect(Math.abs(c.sampled + 0.6)).toBeLessThan(0.015);
-    expect(run.body.results.conventions.join(' ')).toMatch(/porosity~sw -0.6.*Kruskal 1958/);
+    expect(run.body.results.conventions.join(' ')).toMatch(/Porosity \(fraction\) with Sw \(fraction\): -0.6.*Kruskal 1958/);
     // a correlation with an input that has no distribution is refused on run, naming it
     await t.http.patch(url).set('Authorization', await t.tokenFor('engineer')).send({ inputs: { correlations: [{ a: 'bo', b: 'sw', rank: 0.2 }] } }).expect(200);
     const refused = await t.http.post(`${url}/run`).set('Authorization', await t.tokenFor('engineer'));

@@ -24,8 +24,25 @@ describe('sampleRankCorrelation', () => {
     );
   });
 
-  it('ranks ties by their average rank', () => {
+  it('ranks ties by their average rank, negatives and -0 in their numeric order', () => {
     expect(Array.from(ranks(Float64Array.from([10, 20, 10, 30, 20, 20])))).toEqual([1.5, 4, 1.5, 6, 4, 4]);
+    expect(Array.from(ranks(Float64Array.from([-1e300, 3, -0, -2.5, 0, Infinity, -Infinity, 1e-310])))).toEqual([2, 7, 4.5, 3, 4.5, 8, 1, 6]);
+  });
+
+  it('the radix order equals a plain numeric sort (fast-check, any finite doubles)', () => {
+    fc.assert(
+      fc.property(fc.array(fc.double({ noNaN: true }), { minLength: 1, maxLength: 200 }), (xs) => {
+        const x = Float64Array.from(xs);
+        const r = ranks(x);
+        const sorted = [...xs].sort((a, b) => a - b);
+        return xs.every((v, i) => {
+          const first = sorted.findIndex((s) => s === v);
+          const last = sorted.length - 1 - [...sorted].reverse().findIndex((s) => s === v);
+          return r[i] === (first + 1 + last + 1) / 2;
+        });
+      }),
+      { numRuns: 300 },
+    );
   });
 });
 

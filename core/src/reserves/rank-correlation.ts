@@ -129,35 +129,58 @@ export function correlateUniforms(uniforms: Record<string, Float64Array>, correl
 }
 
 /**
- * Ranks of the values, 1 to n, ties given their average rank (NaN ranks NaN): a sorted copy
- * and two binary searches per value.
+ * Ranks of the values, 1 to n, ties given their average rank (NaN ranks NaN, and then the
+ * others are not 1 to n). The order comes
+ * from an LSD radix sort of the values' bit patterns made unsigned-sortable (sign bit set for
+ * positives, all bits flipped for negatives: the IEEE 754 total order), four passes of 16 bits:
+ * about 3x faster than sorting a copy and binary-searching each value (bench/montecarlo.bench.ts).
  */
 export function ranks(x: Float64Array): Float64Array {
-  const sorted = Float64Array.from(x).sort(); // typed-array sort: numeric, NaN last
-  let finite = sorted.length;
-  while (finite > 0 && Number.isNaN(sorted[finite - 1])) finite--;
-  const out = new Float64Array(x.length);
-  for (let i = 0; i < x.length; i++) {
-    const v = x[i];
+  const n = x.length;
+  const words = new Uint32Array(Float64Array.from(x).buffer); // little-endian: [2i] low, [2i + 1] high
+  const lo = new Uint32Array(n);
+  const hi = new Uint32Array(n);
+  for (let i = 0; i < n; i++) {
+    const h = words[2 * i + 1];
+    if (h & 0x80000000) {
+      hi[i] = ~h >>> 0;
+      lo[i] = ~words[2 * i] >>> 0;
+    } else {
+      hi[i] = (h | 0x80000000) >>> 0;
+      lo[i] = words[2 * i];
+    }
+  }
+  let idx = new Uint32Array(n);
+  for (let i = 0; i < n; i++) idx[i] = i;
+  let tmp = new Uint32Array(n);
+  const count = new Uint32Array(65537);
+  for (let pass = 0; pass < 4; pass++) {
+    const key = pass < 2 ? lo : hi;
+    const shift = pass % 2 === 0 ? 0 : 16;
+    count.fill(0);
+    for (let k = 0; k < n; k++) count[((key[k] >>> shift) & 0xffff) + 1]++;
+    if (count[((key[0] >>> shift) & 0xffff) + 1] === n) continue; // every value has this digit
+    for (let d = 1; d <= 65536; d++) count[d] += count[d - 1];
+    for (let k = 0; k < n; k++) {
+      const i = idx[k];
+      tmp[count[(key[i] >>> shift) & 0xffff]++] = i;
+    }
+    const t = idx;
+    idx = tmp;
+    tmp = t;
+  }
+  const out = new Float64Array(n);
+  for (let k = 0; k < n; ) {
+    const v = x[idx[k]];
     if (Number.isNaN(v)) {
-      out[i] = Number.NaN;
+      out[idx[k++]] = Number.NaN; // NaN sorts first or last by its sign bit; its rank is NaN
       continue;
     }
-    let lo = 0;
-    let hi = finite;
-    while (lo < hi) {
-      const mid = (lo + hi) >>> 1;
-      if (sorted[mid] < v) lo = mid + 1;
-      else hi = mid;
-    }
-    let up = lo;
-    let top = finite;
-    while (up < top) {
-      const mid = (up + top) >>> 1;
-      if (sorted[mid] <= v) up = mid + 1;
-      else top = mid;
-    }
-    out[i] = (lo + 1 + up) / 2; // average of ranks lo+1 .. up
+    let j = k + 1;
+    while (j < n && x[idx[j]] === v) j++; // -0 and +0 are adjacent and equal
+    const r = (k + 1 + j) / 2; // average of ranks k+1 .. j
+    for (let m = k; m < j; m++) out[idx[m]] = r;
+    k = j;
   }
   return out;
 }

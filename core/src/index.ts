@@ -243,3 +243,5 @@ export {
   DARCY_FIELD_CONSTANT,
 } from './reserves/inflow.js';
 export type { RadialInflowInput, JoshiInput, JoshiResult, InflowResult } from './reserves/inflow.js';
+export { gasRadialInflowRate, GAS_RADIAL_FLOW_CONSTANT } from './reserves/gas-inflow.js';
+export type { GasInflowInput, GasInflowResult } from './reserves/gas-inflow.js';

@@ -6,10 +6,12 @@ import { CurrentUser, Roles } from '../auth/decorators.js';
 import {
   CreateSeriesDto,
   DeclineFitQueryDto,
+  GasInflowDto,
   InflowDto,
   PzFitQueryDto,
   UploadSeriesDto,
   type DeclineFitDto,
+  type GasInflowResultDto,
   type InflowResultDto,
   type PzFitDto,
   type SeriesDto,
@@ -63,5 +65,11 @@ export class ProductionController {
   @HttpCode(200)
   inflow(@Body() body: InflowDto): InflowResultDto {
     return this.production.inflow(body);
+  }
+
+  @Post('inflow/gas')
+  @HttpCode(200)
+  gasInflow(@Body() body: GasInflowDto): GasInflowResultDto {
+    return this.production.gasInflow(body);
   }
 }

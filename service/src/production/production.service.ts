@@ -12,6 +12,8 @@ import {
   fitPZ,
   joshiHorizontalRate,
   pseudoCriticalSutton,
+  gasPvt,
+  gasRadialInflowRate,
   radialInflowRate,
   scfToM3,
   wellsNeeded,
@@ -31,6 +33,8 @@ import type {
   CreateSeriesDto,
   DeclineFitDto,
   DeclineFitQueryDto,
+  GasInflowDto,
+  GasInflowResultDto,
   InflowDto,
   InflowResultDto,
   PzFitDto,
@@ -199,6 +203,42 @@ export class ProductionService implements CaseCrossChecks {
     if (row.kind !== 'rate') throw new BadRequestException('seriesId: a decline is fitted to a rate series; this one holds pressures');
     try {
       return this.computeDecline(row, query.kind, query.economicLimit);
+    } catch (error) {
+      if (error instanceof RangeError) throw new BadRequestException(error.message);
+      throw error;
+    }
+  }
+
+  /** Gas well inflow, pressure-squared form; z at the average pressure from the gas gravity (Sutton, DAK or Hall-Yarborough). */
+  gasInflow(body: GasInflowDto): GasInflowResultDto {
+    try {
+      const averagePressurePsia = (body.reservoirPressurePsia + body.bottomholePressurePsia) / 2;
+      const zMethod = body.zMethod ?? 'dak';
+      const pvt = gasPvt({ pressurePsia: averagePressurePsia, temperatureF: body.temperatureF, gasGravity: body.gasGravity, zMethod });
+      const r = gasRadialInflowRate({
+        kMd: body.permeabilityMd,
+        netPayFt: body.netPayFt,
+        reservoirPressurePsia: body.reservoirPressurePsia,
+        bottomholePressurePsia: body.bottomholePressurePsia,
+        temperatureF: body.temperatureF,
+        muCp: body.viscosityCp,
+        z: pvt.z,
+        reFt: body.drainageRadiusFt,
+        rwFt: body.wellboreRadiusFt,
+        skin: body.skin ?? 0,
+      });
+      return {
+        ...r,
+        averagePressurePsia,
+        pvt: { z: pvt.z, zMethod, tpr: pvt.tpr, ppr: pvt.ppr },
+        equation: 'q [Mscf/d] = k h (pr^2 - pwf^2) / (1422 T mu z (ln(re/rw) - 0.75 + s)), T in R, pseudo-steady state (Lee & Wattenbarger 1996; Ahmed 2006)',
+        assumptions: [
+          'Single-phase gas, Darcy flow (no non-Darcy / turbulence term), homogeneous layer of uniform thickness, circular drainage area at pseudo-steady state.',
+          'Pressure-squared form: gas viscosity and z taken at the average of the reservoir and bottom-hole pressures; fit below about 2,000 psia, where mu z hardly changes. At higher pressures use the pseudo-pressure form.',
+          'Rate at standard conditions of 14.7 psia and 60 F, the basis of the printed constant 1422.',
+          'Absolute open flow: the rate at zero bottom-hole pressure with the same mu and z (an index of the well, not a rate to produce at).',
+        ],
+      };
     } catch (error) {
       if (error instanceof RangeError) throw new BadRequestException(error.message);
       throw error;

@@ -236,4 +236,24 @@ describe('production data and cross-checks (p/z, Arps decline, inflow)', () => {
     const missing = await t.http.post(`/api/assets/${assetId}/inflow`).set('Authorization', await t.tokenFor('viewer')).send({ ...body, viscosityCp: undefined });
     expect(JSON.stringify(missing.body.message)).toMatch(/viscosityCp must be a number/);
   });
+
+  it('POST inflow/gas: pressure-squared rate by hand with z from DAK at the average pressure; a bottom-hole pressure above the reservoir is 400', async () => {
+    const body = { permeabilityMd: 5, netPayFt: 40, viscosityCp: 0.016, reservoirPressurePsia: 2000, bottomholePressurePsia: 1200, temperatureF: 180, gasGravity: 0.65, drainageRadiusFt: 1490, wellboreRadiusFt: 0.328 };
+    const res = await t.http.post(`/api/assets/${assetId}/inflow/gas`).set('Authorization', await t.tokenFor('viewer')).send(body);
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    expect(res.body.averagePressurePsia).toBe(1600);
+    const z = res.body.pvt.z;
+    expect(z).toBeGreaterThan(0.8);
+    expect(z).toBeLessThan(0.95);
+    // q = k h (pr^2 - pwf^2) / (1422 T mu z (ln(re/rw) - 0.75)), T = 180 + 459.67 R, by hand
+    const byHand = (5 * 40 * (2000 ** 2 - 1200 ** 2)) / (1422 * 639.67 * 0.016 * z * (Math.log(1490 / 0.328) - 0.75));
+    expect(res.body.rateMscfPerDay).toBeCloseTo(byHand, 6);
+    expect(res.body.absoluteOpenFlowMscfPerDay).toBeGreaterThan(res.body.rateMscfPerDay);
+    expect(res.body.equation).toMatch(/1422/);
+    const bad = await t.http.post(`/api/assets/${assetId}/inflow/gas`).set('Authorization', await t.tokenFor('viewer')).send({ ...body, bottomholePressurePsia: 2500 });
+    expect(bad.status).toBe(400);
+    expect(JSON.stringify(bad.body.message)).toMatch(/bottomholePressurePsia must be <= reservoirPressurePsia/);
+    const missing = await t.http.post(`/api/assets/${assetId}/inflow/gas`).set('Authorization', await t.tokenFor('viewer')).send({ ...body, gasGravity: 'x' });
+    expect(JSON.stringify(missing.body.message)).toMatch(/gasGravity must be a number/);
+  });
 });

@@ -70,6 +70,34 @@ export class InflowDto {
   @ApiPropertyOptional({ type: HorizontalDto }) @IsOptional() @ValidateNested() @Type(() => HorizontalDto) horizontal?: HorizontalDto;
 }
 
+/** POST /api/assets/:assetId/inflow/gas: a gas well's pseudo-steady-state rate (pressure-squared form). */
+export class GasInflowDto {
+  @ApiProperty() @IsNumber({}, { message: 'permeabilityMd must be a number' }) permeabilityMd: number;
+  @ApiProperty() @IsNumber({}, { message: 'netPayFt must be a number' }) netPayFt: number;
+  @ApiProperty({ description: 'Gas viscosity at the average of the two pressures, cp' }) @IsNumber({}, { message: 'viscosityCp must be a number' }) viscosityCp: number;
+  @ApiProperty({ description: 'Average reservoir pressure, psia' }) @IsNumber({}, { message: 'reservoirPressurePsia must be a number' }) reservoirPressurePsia: number;
+  @ApiProperty({ description: 'Flowing bottom-hole pressure, psia' }) @IsNumber({}, { message: 'bottomholePressurePsia must be a number' }) bottomholePressurePsia: number;
+  @ApiProperty() @IsNumber({}, { message: 'temperatureF must be a number' }) temperatureF: number;
+  @ApiProperty({ description: 'Gas specific gravity, air = 1 (z at the average pressure from Sutton pseudo-criticals)' })
+  @IsNumber({}, { message: 'gasGravity must be a number' })
+  gasGravity: number;
+  @ApiPropertyOptional({ enum: ['dak', 'hall-yarborough'] }) @IsOptional() @IsIn(['dak', 'hall-yarborough'], { message: 'zMethod must be dak or hall-yarborough' }) zMethod?: 'dak' | 'hall-yarborough';
+  @ApiProperty() @IsNumber({}, { message: 'drainageRadiusFt must be a number' }) drainageRadiusFt: number;
+  @ApiProperty() @IsNumber({}, { message: 'wellboreRadiusFt must be a number' }) wellboreRadiusFt: number;
+  @ApiPropertyOptional() @IsOptional() @IsNumber({}, { message: 'skin must be a number' }) skin?: number;
+}
+
+export interface GasInflowResultDto {
+  rateMscfPerDay: number;
+  absoluteOpenFlowMscfPerDay: number;
+  coefficient: number;
+  averagePressurePsia: number;
+  /** z at the average pressure, with the pseudo-reduced values it came from. */
+  pvt: { z: number; zMethod: 'dak' | 'hall-yarborough'; tpr: number; ppr: number };
+  equation: string;
+  assumptions: string[];
+}
+
 export interface SeriesDto {
   id: string;
   wellId: string;

@@ -129,7 +129,7 @@ describe('reserves in Chromium: an engineer builds a case from approved net pay,
     await page.close();
   });
 
-  it('the demo gas case shows the p/z cross-check with drained gas and wells needed, a decline fit and the inflow estimate', async () => {
+  it('the demo gas case shows the p/z cross-check with drained gas and wells needed, a decline fit and the gas inflow estimate', async () => {
     const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
     await signIn(page, baseUrl, 'engineer@poreline.demo', 'engineer-demo-2026');
     await page.getByRole('link', { name: 'Wrenmoor Field' }).click();
@@ -151,10 +151,15 @@ describe('reserves in Chromium: an engineer builds a case from approved net pay,
       await page.getByRole('img', { name: /Rate against time with the hyperbolic Arps fit/ }).waitFor({ timeout: 30_000 });
       await screenshot(page, 'reserves-cross-check-decline');
     }
+    // a gas case gets the gas form of the inflow equation, started from the case's reservoir pressure
     await page.getByRole('tab', { name: /Inflow/ }).click();
-    await page.getByRole('button', { name: 'Estimate rate' }).click();
-    await page.getByRole('region', { name: 'Inflow result' }).waitFor();
-    await page.getByText(/as productively as a vertical well/).waitFor({ state: 'visible' });
+    const pr = Number(await page.getByLabel('Average reservoir pressure pr (psia)').inputValue());
+    expect(pr).toBeGreaterThan(0);
+    await page.getByRole('button', { name: 'Estimate gas rate' }).click();
+    const result = page.getByRole('region', { name: 'Gas inflow result' });
+    await result.waitFor();
+    expect(Number(await result.locator('[data-stat="rate"] [data-value]').getAttribute('data-value'))).toBeGreaterThan(0);
+    await result.getByText(/1422 T mu z/).waitFor({ state: 'visible' });
     await screenshot(page, 'reserves-inflow');
     await page.close();
   });

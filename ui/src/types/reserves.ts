@@ -299,3 +299,28 @@ export interface InflowResultDto {
   };
   assumptions: string[];
 }
+
+/** POST /assets/:assetId/inflow/gas (service: production/dto/production.dto.ts GasInflowDto). */
+export interface GasInflowInput {
+  permeabilityMd: number;
+  netPayFt: number;
+  viscosityCp: number;
+  reservoirPressurePsia: number;
+  bottomholePressurePsia: number;
+  temperatureF: number;
+  gasGravity: number;
+  zMethod?: 'dak' | 'hall-yarborough';
+  drainageRadiusFt: number;
+  wellboreRadiusFt: number;
+  skin?: number;
+}
+
+export interface GasInflowResultDto {
+  rateMscfPerDay: number;
+  absoluteOpenFlowMscfPerDay: number;
+  coefficient: number;
+  averagePressurePsia: number;
+  pvt: { z: number; zMethod: 'dak' | 'hall-yarborough'; tpr: number; ppr: number };
+  equation: string;
+  assumptions: string[];
+}

@@ -10,6 +10,7 @@ import { assetQueryOptions, useAsset } from '../../features/assets/api/get-asset
 import { useMe } from '../../features/auth/api/get-me';
 import { roleInAsset } from '../../features/auth/utils/permissions';
 import { CrossChecksPanel } from '../../features/production/components/cross-checks-panel';
+import { GasInflowCalculator } from '../../features/production/components/gas-inflow-calculator';
 import { InflowCalculator } from '../../features/production/components/inflow-calculator';
 import { reservesCaseQueryOptions, useReservesCase } from '../../features/reserves/api/get-reserves-case';
 import { useUpdateReservesCase } from '../../features/reserves/api/update-reserves-case';
@@ -86,7 +87,11 @@ export function ReservesCaseRoute() {
         }
         inflow={
           <PanelErrorBoundary title="The inflow calculator">
-            <InflowCalculator assetId={assetId} netPayFt={netPayFt} bo={c.inputs.fluid === 'oil' ? c.inputs.bo : null} />
+            {c.inputs.fluid === 'gas' ? (
+              <GasInflowCalculator assetId={assetId} netPayFt={netPayFt} gas={c.inputs.gas} />
+            ) : (
+              <InflowCalculator assetId={assetId} netPayFt={netPayFt} bo={c.inputs.bo} />
+            )}
           </PanelErrorBoundary>
         }
       />

@@ -3,6 +3,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { setToken } from '../../../lib/auth-token';
 import { FakeXhr } from '../../../test/fake-xhr';
 import { jsonResponse, renderWithProviders } from '../../../test/render';
+import { GasInflowCalculator } from './gas-inflow-calculator';
 import { InflowCalculator } from './inflow-calculator';
 import { SeriesUploadForm } from './series-upload-form';
 
@@ -53,5 +54,35 @@ describe('production data and inflow', () => {
     const body = JSON.parse(String((fetchMock.mock.calls[0] as unknown as [string, RequestInit])[1].body));
     expect(body).toMatchObject({ netPayFt: 30, fvf: 1.2, viscosityCp: 1.2, horizontal: { lengthFt: 2000 } });
     expect(screen.getByText(/7\.2 ×/)).toBeTruthy();
+  });
+
+  it('GasInflowCalculator starts from the case PVT, refuses a bottom-hole pressure above the reservoir pressure, then posts and shows the rate and z', async () => {
+    const fetchMock = vi.fn(async () =>
+      jsonResponse(200, {
+        rateMscfPerDay: 2345.6,
+        absoluteOpenFlowMscfPerDay: 3664.9,
+        coefficient: 9.1625e-4,
+        averagePressurePsia: 1840,
+        pvt: { z: 0.8712, zMethod: 'hall-yarborough', tpr: 1.63, ppr: 2.75 },
+        equation: 'q [Mscf/d] = k h (pr^2 - pwf^2) / (1422 T mu z (ln(re/rw) - 0.75 + s))',
+        assumptions: ['Single-phase gas, Darcy flow.'],
+      }),
+    );
+    vi.stubGlobal('fetch', fetchMock);
+    renderWithProviders(<GasInflowCalculator assetId="a1" netPayFt={42.5} gas={{ pressurePsia: 2300, temperatureF: 175, gasGravity: 0.68, zMethod: 'hall-yarborough' }} />);
+    expect((screen.getByLabelText('Average reservoir pressure pr (psia)') as HTMLInputElement).value).toBe('2300');
+    expect((screen.getByLabelText('Flowing bottom-hole pressure pwf (psia)') as HTMLInputElement).value).toBe('1380');
+    fireEvent.change(screen.getByLabelText('Flowing bottom-hole pressure pwf (psia)'), { target: { value: '2500' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Estimate gas rate' }));
+    expect(await screen.findByText(/must not exceed the reservoir pressure/)).toBeTruthy();
+    expect(fetchMock).not.toHaveBeenCalled();
+    fireEvent.change(screen.getByLabelText('Flowing bottom-hole pressure pwf (psia)'), { target: { value: '1380' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Estimate gas rate' }));
+    const result = await screen.findByRole('region', { name: 'Gas inflow result' });
+    const [url, init] = fetchMock.mock.calls[0] as unknown as [string, RequestInit];
+    expect(url).toBe('/api/assets/a1/inflow/gas');
+    expect(JSON.parse(String(init.body))).toMatchObject({ netPayFt: 42.5, reservoirPressurePsia: 2300, bottomholePressurePsia: 1380, temperatureF: 175, gasGravity: 0.68, zMethod: 'hall-yarborough' });
+    expect(result.querySelector('[data-stat="rate"] [data-value]')!.getAttribute('data-value')).toBe('2345.6');
+    expect(result.textContent).toMatch(/Hall & Yarborough/);
   });
 });

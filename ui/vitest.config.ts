@@ -13,5 +13,8 @@ export default defineConfig({
     include: ['src/**/*.test.tsx', 'src/**/*.test.ts'],
     exclude: ['e2e/**', 'node_modules/**', 'dist/**'],
     setupFiles: ['./src/test/setup.ts'],
+    // jsdom renders of whole panels take 1-2 s alone and 5 s or more while the full suite loads
+    // both cores; the default 5 s limit then fails tests that are merely slow.
+    testTimeout: 20_000,
   },
 });

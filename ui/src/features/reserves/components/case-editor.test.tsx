@@ -64,14 +64,15 @@ describe('CaseEditor', () => {
     expect(JSON.parse(String(init.body))).toEqual({ comment: 'Explain RF' });
   });
 
-  it('correlated inputs: the results say what was asked and drawn; the inputs tab adds a pair and saves it', async () => {
+  it('correlated inputs: the results say what was asked and what was drawn', () => {
     const inputs = { ...oilInputs(), correlations: [{ a: 'area' as const, b: 'sw' as const, rank: 0.4 }] };
     const withPair = reservesCase({ inputs, results: resultsFor(inputs) });
-    const { unmount } = renderWithProviders(<CaseEditor assetId="a1" reservesCase={withPair} canEdit canReview={false} />);
+    renderWithProviders(<CaseEditor assetId="a1" reservesCase={withPair} canEdit canReview={false} />);
     const note = screen.getByRole('note', { name: 'Correlated inputs' });
     expect(note.textContent).toMatch(/Area with Sw 0\.40, drawn 0\.[34]\d\d/);
-    unmount();
+  });
 
+  it('correlated inputs: the inputs tab adds a pair, refuses a rank out of range, and saves it', async () => {
     const fetchMock = vi.fn(async (_url: string, init?: RequestInit) => jsonResponse(200, reservesCase({ inputs: { ...oilInputs(), ...JSON.parse(String(init?.body)).inputs } })));
     vi.stubGlobal('fetch', fetchMock);
     renderWithProviders(<CaseEditor assetId="a1" reservesCase={reservesCase()} canEdit canReview={false} />);

@@ -6,13 +6,9 @@ import { z } from 'zod';
 import type { GasInputs } from '../../../types/reserves';
 import { useGasInflow } from '../api/post-gas-inflow';
 import { sig } from '../utils/axes';
+import { optionalNumberText, positiveText } from '../utils/number-text';
+import { NumberFieldGrid } from './number-field-grid';
 
-const positive = (label: string) =>
-  z
-    .string()
-    .trim()
-    .min(1, { error: `${label} is required.` })
-    .refine((s) => Number(s) > 0, { error: `${label} must be a number > 0.` });
 const number = (label: string) =>
   z
     .string()
@@ -22,19 +18,16 @@ const number = (label: string) =>
 
 const schema = z
   .object({
-    permeabilityMd: positive('Permeability'),
-    netPayFt: positive('Net pay'),
-    viscosityCp: positive('Gas viscosity'),
-    reservoirPressurePsia: positive('Reservoir pressure'),
+    permeabilityMd: positiveText('Permeability'),
+    netPayFt: positiveText('Net pay'),
+    viscosityCp: positiveText('Gas viscosity'),
+    reservoirPressurePsia: positiveText('Reservoir pressure'),
     bottomholePressurePsia: number('Bottom-hole pressure').refine((s) => Number(s) >= 0, { error: 'Bottom-hole pressure must be a number >= 0.' }),
     temperatureF: number('Reservoir temperature'),
     gasGravity: number('Gas gravity').refine((s) => Number(s) >= 0.55 && Number(s) <= 1.8, { error: 'Gas gravity must be between 0.55 and 1.8 (Sutton 1985 range).' }),
-    drainageRadiusFt: positive('Drainage radius'),
-    wellboreRadiusFt: positive('Wellbore radius'),
-    skin: z
-      .string()
-      .trim()
-      .refine((s) => s === '' || Number.isFinite(Number(s)), { error: 'Skin must be a number or empty.' }),
+    drainageRadiusFt: positiveText('Drainage radius'),
+    wellboreRadiusFt: positiveText('Wellbore radius'),
+    skin: optionalNumberText('Skin'),
   })
   .refine((v) => Number(v.bottomholePressurePsia) <= Number(v.reservoirPressurePsia), {
     path: ['bottomholePressurePsia'],
@@ -113,21 +106,7 @@ export function GasInflowCalculator({ assetId, netPayFt, gas }: GasInflowCalcula
       </Heading>
       <form onSubmit={submit} noValidate aria-label="Gas inflow inputs">
         <Flex direction="column" gap="3">
-          <div className="rc-input-grid">
-            {FIELDS.map((f) => (
-              <Flex direction="column" gap="1" key={f.key} className="rc-field">
-                <Text as="label" htmlFor={`${id}-${f.key}`} size="2" weight="medium">
-                  {f.label}
-                </Text>
-                <input id={`${id}-${f.key}`} className="number-input" inputMode="decimal" aria-invalid={errors[f.key] ? true : undefined} {...register(f.key)} />
-                {errors[f.key] ? (
-                  <Text size="1" color="tomato">
-                    {errors[f.key]!.message}
-                  </Text>
-                ) : null}
-              </Flex>
-            ))}
-          </div>
+          <NumberFieldGrid idPrefix={id} fields={FIELDS} register={register} errors={errors} />
           <Flex>
             <Button type="submit" loading={inflow.isPending}>
               Estimate gas rate

@@ -5,30 +5,20 @@ import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { useInflow } from '../api/post-inflow';
 import { sig } from '../utils/axes';
-
-const positive = (label: string) =>
-  z
-    .string()
-    .trim()
-    .min(1, { error: `${label} is required.` })
-    .refine((s) => Number(s) > 0, { error: `${label} must be a number > 0.` });
-const optionalNumber = (label: string, min = -Infinity) =>
-  z
-    .string()
-    .trim()
-    .refine((s) => s === '' || (Number.isFinite(Number(s)) && Number(s) >= min), { error: `${label} must be a number${min > -Infinity ? ` >= ${min}` : ''} or empty.` });
+import { optionalNumberText, positiveText } from '../utils/number-text';
+import { NumberFieldGrid } from './number-field-grid';
 
 const schema = z.object({
-  permeabilityMd: positive('Permeability'),
-  netPayFt: positive('Net pay'),
-  viscosityCp: positive('Viscosity'),
-  fvf: positive('Bo'),
-  drawdownPsi: positive('Drawdown'),
-  drainageRadiusFt: positive('Drainage radius'),
-  wellboreRadiusFt: positive('Wellbore radius'),
-  skin: optionalNumber('Skin'),
-  lengthFt: optionalNumber('Lateral length', 1),
-  kvMd: optionalNumber('kv', 0),
+  permeabilityMd: positiveText('Permeability'),
+  netPayFt: positiveText('Net pay'),
+  viscosityCp: positiveText('Viscosity'),
+  fvf: positiveText('Bo'),
+  drawdownPsi: positiveText('Drawdown'),
+  drainageRadiusFt: positiveText('Drainage radius'),
+  wellboreRadiusFt: positiveText('Wellbore radius'),
+  skin: optionalNumberText('Skin'),
+  lengthFt: optionalNumberText('Lateral length', 1),
+  kvMd: optionalNumberText('kv', 0),
 });
 type Values = z.infer<typeof schema>;
 
@@ -100,21 +90,7 @@ export function InflowCalculator({ assetId, netPayFt, bo }: InflowCalculatorProp
       </Heading>
       <form onSubmit={submit} noValidate aria-label="Inflow inputs">
         <Flex direction="column" gap="3">
-          <div className="rc-input-grid">
-            {FIELDS.map((f) => (
-              <Flex direction="column" gap="1" key={f.key} className="rc-field">
-                <Text as="label" htmlFor={`${id}-${f.key}`} size="2" weight="medium">
-                  {f.label}
-                </Text>
-                <input id={`${id}-${f.key}`} className="number-input" inputMode="decimal" aria-invalid={errors[f.key] ? true : undefined} {...register(f.key)} />
-                {errors[f.key] ? (
-                  <Text size="1" color="tomato">
-                    {errors[f.key]!.message}
-                  </Text>
-                ) : null}
-              </Flex>
-            ))}
-          </div>
+          <NumberFieldGrid idPrefix={id} fields={FIELDS} register={register} errors={errors} />
           <Flex>
             <Button type="submit" loading={inflow.isPending}>
               Estimate rate

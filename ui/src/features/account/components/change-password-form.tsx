@@ -1,8 +1,9 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Button, Callout, Flex, Heading, Text, TextField } from '@radix-ui/themes';
+import { Button, Callout, Flex, Heading, Text } from '@radix-ui/themes';
 import { useId } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
+import { TextFormField } from '../../../components/text-form-field';
 import { serverFieldErrors } from '../../../lib/server-field-errors';
 import { useChangePassword } from '../api/change-password';
 
@@ -59,28 +60,7 @@ export function ChangePasswordForm() {
   const other = change.error ? serverFieldErrors(change.error, LABELS).other : [];
 
   const field = (name: Field, autoComplete: string, hint?: string) => (
-    <Flex direction="column" gap="1">
-      <Text as="label" htmlFor={`${id}-${name}`} size="2" weight="medium">
-        {LABELS[name]}
-      </Text>
-      <TextField.Root
-        id={`${id}-${name}`}
-        type="password"
-        autoComplete={autoComplete}
-        aria-invalid={errors[name] ? true : undefined}
-        aria-describedby={errors[name] ? `${id}-${name}-error` : hint ? `${id}-${name}-hint` : undefined}
-        {...register(name)}
-      />
-      {errors[name] ? (
-        <Text id={`${id}-${name}-error`} size="1" color="tomato">
-          {errors[name].message}
-        </Text>
-      ) : hint ? (
-        <Text id={`${id}-${name}-hint`} size="1" color="gray">
-          {hint}
-        </Text>
-      ) : null}
-    </Flex>
+    <TextFormField id={`${id}-${name}`} label={LABELS[name]} type="password" autoComplete={autoComplete} error={errors[name]?.message} hint={hint} registration={register(name)} />
   );
 
   return (

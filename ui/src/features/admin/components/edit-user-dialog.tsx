@@ -1,8 +1,9 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Button, Callout, Dialog, Flex, Text, TextField } from '@radix-ui/themes';
+import { Button, Callout, Dialog, Flex, Text } from '@radix-ui/themes';
 import { useId, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
+import { TextFormField } from '../../../components/text-form-field';
 import { serverFieldErrors } from '../../../lib/server-field-errors';
 import type { UserAccount } from '../../../types/admin';
 import { useUpdateUser, type UpdateUserInput } from '../api/update-user';
@@ -67,28 +68,7 @@ export function EditUserDialog({ user }: { user: UserAccount }) {
   const other = update.error ? serverFieldErrors(update.error, LABELS).other : [];
 
   const field = (name: Field, type: 'text' | 'password', autoComplete: string, hint?: string) => (
-    <Flex direction="column" gap="1">
-      <Text as="label" htmlFor={`${id}-${name}`} size="2" weight="medium">
-        {LABELS[name]}
-      </Text>
-      <TextField.Root
-        id={`${id}-${name}`}
-        type={type}
-        autoComplete={autoComplete}
-        aria-invalid={errors[name] ? true : undefined}
-        aria-describedby={errors[name] ? `${id}-${name}-error` : hint ? `${id}-${name}-hint` : undefined}
-        {...register(name)}
-      />
-      {errors[name] ? (
-        <Text id={`${id}-${name}-error`} size="1" color="tomato">
-          {errors[name].message}
-        </Text>
-      ) : hint ? (
-        <Text id={`${id}-${name}-hint`} size="1" color="gray">
-          {hint}
-        </Text>
-      ) : null}
-    </Flex>
+    <TextFormField id={`${id}-${name}`} label={LABELS[name]} type={type} autoComplete={autoComplete} error={errors[name]?.message} hint={hint} registration={register(name)} />
   );
 
   return (

@@ -1,8 +1,9 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Button, Callout, Dialog, Flex, Text, TextArea, TextField } from '@radix-ui/themes';
+import { Button, Callout, Dialog, Flex, Text, TextArea } from '@radix-ui/themes';
 import { useId, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
+import { TextFormField } from '../../../components/text-form-field';
 import { serverFieldErrors } from '../../../lib/server-field-errors';
 import type { Asset } from '../../../types/api';
 import { useUpdateAsset } from '../api/update-asset';
@@ -83,17 +84,7 @@ export function EditAssetDialog({ asset }: EditAssetDialogProps) {
                 <Callout.Text>{other.join(' ')}</Callout.Text>
               </Callout.Root>
             ) : null}
-            <Flex direction="column" gap="1">
-              <Text as="label" htmlFor={`${id}-name`} size="2" weight="medium">
-                {LABELS.name}
-              </Text>
-              <TextField.Root id={`${id}-name`} aria-invalid={errors.name ? true : undefined} aria-describedby={errors.name ? `${id}-name-error` : undefined} {...register('name')} />
-              {errors.name ? (
-                <Text id={`${id}-name-error`} size="1" color="tomato">
-                  {errors.name.message}
-                </Text>
-              ) : null}
-            </Flex>
+            <TextFormField id={`${id}-name`} label={LABELS.name} error={errors.name?.message} registration={register('name')} />
             <Flex direction="column" gap="1">
               <Text as="label" htmlFor={`${id}-description`} size="2" weight="medium">
                 {LABELS.description}

@@ -4,6 +4,7 @@ import { JwtService } from '@nestjs/jwt';
 import { UsersRepository } from './users.repository.js';
 import type { AuthedRequest } from './auth-user.js';
 import { IS_PUBLIC } from './decorators.js';
+import { passwordFingerprint, type SessionClaims } from './session-token.js';
 
 /** Global guard: every route needs a valid bearer token unless marked @Public(). */
 @Injectable()
@@ -21,14 +22,15 @@ export class JwtAuthGuard implements CanActivate {
     const header = req.headers.authorization;
     const token = typeof header === 'string' && header.startsWith('Bearer ') ? header.slice(7) : undefined;
     if (!token) throw new UnauthorizedException('Sign in first: this request carries no token.');
-    let payload: { sub: string };
+    let payload: SessionClaims;
     try {
-      payload = await this.jwt.verifyAsync<{ sub: string }>(token);
+      payload = await this.jwt.verifyAsync<SessionClaims>(token);
     } catch {
       throw new UnauthorizedException('Your session has expired or the token is invalid: sign in again.');
     }
     const user = await this.users.findById(payload.sub);
     if (!user) throw new UnauthorizedException('This account no longer exists.');
+    if (payload.pwv !== passwordFingerprint(user.passwordHash)) throw new UnauthorizedException('The password of this account has changed since you signed in: sign in again.');
     req.user = { id: user.id, email: user.email, name: user.name, organisationId: user.organisationId, isAdmin: user.isAdmin };
     return true;
   }

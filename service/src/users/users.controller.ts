@@ -24,10 +24,10 @@ export class UsersController {
     return this.users.create(body, user);
   }
 
-  /** Any signed-in user, for their own account. */
+  /** Any signed-in user, for their own account: other sessions end; the answer carries a new token for this one. */
   @Patch('me/password')
-  @HttpCode(204)
-  changeOwnPassword(@Body() body: ChangePasswordDto, @CurrentUser() user: AuthUser): Promise<void> {
+  @HttpCode(200)
+  changeOwnPassword(@Body() body: ChangePasswordDto, @CurrentUser() user: AuthUser): Promise<{ token: string }> {
     return this.users.changeOwnPassword(body, user);
   }
 

@@ -2,6 +2,7 @@ import { BadRequestException, ConflictException, Injectable, NotFoundException }
 import type { User } from '@poreline/schema';
 import bcrypt from 'bcryptjs';
 import type { AuthUser } from '../auth/auth-user.js';
+import { AuthService } from '../auth/auth.service.js';
 import { UsersRepository } from '../auth/users.repository.js';
 import { isUuid } from '../common/ids.js';
 import type { ChangePasswordDto, CreateUserDto, UpdateUserDto, UserDto } from './dto/user.dto.js';
@@ -19,6 +20,7 @@ export class UsersService {
   constructor(
     private readonly accounts: UserAccountsRepository,
     private readonly signIn: UsersRepository,
+    private readonly auth: AuthService,
   ) {}
 
   async list(admin: AuthUser): Promise<UserDto[]> {
@@ -76,13 +78,17 @@ export class UsersService {
     return toUserDto(row, memberships);
   }
 
-  /** The signed-in user changes their own password; the current one must be given. */
-  async changeOwnPassword(body: ChangePasswordDto, me: AuthUser): Promise<void> {
+  /**
+   * The signed-in user changes their own password; the current one must be given. Every session
+   * opened with the old password ends (session-token.ts); the caller gets a new token for this one.
+   */
+  async changeOwnPassword(body: ChangePasswordDto, me: AuthUser): Promise<{ token: string }> {
     const user = await this.require(me.organisationId, me.id);
     if (!(await bcrypt.compare(body.currentPassword, user.passwordHash))) throw new BadRequestException('currentPassword is not your current password.');
     if (body.newPassword === body.currentPassword) throw new BadRequestException('newPassword must differ from the current password.');
     const passwordHash = await bcrypt.hash(body.newPassword, BCRYPT_ROUNDS);
-    await this.accounts.update(user.id, { passwordHash }, () => ({ assetId: null, userId: me.id, action: 'update', entity: 'user', entityId: me.id, after: { email: user.email, passwordChanged: true } }));
+    const after = await this.accounts.update(user.id, { passwordHash }, () => ({ assetId: null, userId: me.id, action: 'update', entity: 'user', entityId: me.id, after: { email: user.email, passwordChanged: true } }));
+    return { token: await this.auth.tokenFor(after) };
   }
 
   /** The account, if it belongs to the organisation; 404 otherwise (no reading across organisations). */

@@ -117,17 +117,35 @@ describe(UsersService.name, () => {
     expect(res.body.message).toMatch(/^isAdmin: .*last admin/);
   });
 
-  it('PATCH /api/users/me/password changes the caller password (204) after checking the current one (400 naming the field)', async () => {
+  it('PATCH /api/users/me/password changes the caller password after checking the current one (400 naming the field); other sessions end, this one gets a new token', async () => {
     const login = await t.http.post('/api/auth/login').send({ email: 'kim.larsen@poreline.demo', password: 'a-reset-password-1' });
     const kim = `Bearer ${login.body.token}`;
+    const otherDevice = `Bearer ${(await t.http.post('/api/auth/login').send({ email: 'kim.larsen@poreline.demo', password: 'a-reset-password-1' })).body.token}`;
     const wrong = await t.http.patch('/api/users/me/password').set('Authorization', kim).send({ currentPassword: 'not-my-password', newPassword: 'my-own-new-password' });
     expect(wrong.status).toBe(400);
     expect(wrong.body.message).toMatch(/^currentPassword /);
     const short = await t.http.patch('/api/users/me/password').set('Authorization', kim).send({ currentPassword: 'a-reset-password-1', newPassword: 'short' });
     expect(JSON.stringify(short.body.message)).toContain('newPassword must be at least 12 characters');
     const ok = await t.http.patch('/api/users/me/password').set('Authorization', kim).send({ currentPassword: 'a-reset-password-1', newPassword: 'my-own-new-password' });
-    expect(ok.status).toBe(204);
+    expect(ok.status).toBe(200);
     expect((await t.http.post('/api/auth/login').send({ email: 'kim.larsen@poreline.demo', password: 'my-own-new-password' })).status).toBe(200);
     expect((await t.http.post('/api/auth/login').send({ email: 'kim.larsen@poreline.demo', password: 'a-reset-password-1' })).status).toBe(401);
+    // sessions opened with the old password are over; the new token carries on
+    for (const old of [kim, otherDevice]) {
+      const refused = await t.http.get('/api/auth/me').set('Authorization', old);
+      expect(refused.status).toBe(401);
+      expect(refused.body.message).toMatch(/password of this account has changed/);
+    }
+    expect((await t.http.get('/api/auth/me').set('Authorization', `Bearer ${ok.body.token}`)).body.email).toBe('kim.larsen@poreline.demo');
+  });
+
+  it('an admin resetting a password ends the sessions the user had; a name change does not', async () => {
+    const before = `Bearer ${(await t.http.post('/api/auth/login').send({ email: 'kim.larsen@poreline.demo', password: 'my-own-new-password' })).body.token}`;
+    const list = await t.http.get('/api/users').set('Authorization', admin);
+    const kimId = list.body.find((u: { email: string }) => u.email === 'kim.larsen@poreline.demo').id;
+    await t.http.patch(`/api/users/${kimId}`).set('Authorization', admin).send({ name: 'Kim Larsen-Berg' }).expect(200);
+    expect((await t.http.get('/api/auth/me').set('Authorization', before)).status).toBe(200);
+    await t.http.patch(`/api/users/${kimId}`).set('Authorization', admin).send({ password: 'an-admin-reset-2' }).expect(200);
+    expect((await t.http.get('/api/auth/me').set('Authorization', before)).status).toBe(401);
   });
 });

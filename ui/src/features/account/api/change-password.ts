@@ -1,5 +1,6 @@
 import { useMutation } from '@tanstack/react-query';
 import { apiJson } from '../../../lib/api-client';
+import { setToken } from '../../../lib/auth-token';
 
 export interface ChangePasswordInput {
   currentPassword: string;
@@ -8,14 +9,17 @@ export interface ChangePasswordInput {
 }
 
 /**
- * PATCH /api/users/me/password (any signed-in user; 204). 400 when the current password is wrong,
- * the new one is too short or the same; the messages name the field.
+ * PATCH /api/users/me/password (any signed-in user). 400 when the current password is wrong,
+ * the new one is too short or the same; the messages name the field. The service ends every
+ * session opened with the old password and answers with a new token for this one, kept here
+ * so this session stays signed in.
  */
-export function changePassword(input: ChangePasswordInput): Promise<void> {
-  return apiJson<void>('/users/me/password', { method: 'PATCH', json: input });
+export async function changePassword(input: ChangePasswordInput): Promise<void> {
+  const { token } = await apiJson<{ token: string }>('/users/me/password', { method: 'PATCH', json: input });
+  setToken(token);
 }
 
-/** Nothing cached shows the password, so there is nothing to invalidate; the session stays signed in. */
+/** Nothing cached shows the password, so there is nothing to invalidate. */
 export function useChangePassword() {
   return useMutation({ mutationFn: changePassword });
 }

@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { setToken } from '../../../lib/auth-token';
+import { getToken, setToken } from '../../../lib/auth-token';
 import { jsonResponse, renderWithProviders } from '../../../test/render';
 import { ChangePasswordForm } from './change-password-form';
 
@@ -46,16 +46,17 @@ describe('ChangePasswordForm', () => {
     expect(fetchMock).not.toHaveBeenCalled();
   });
 
-  it('PATCHes current and new password, confirms, and empties the fields', async () => {
-    const fetchMock = vi.fn(async () => new Response(null, { status: 204 }));
+  it('PATCHes current and new password, keeps the new token for this session, confirms, and empties the fields', async () => {
+    const fetchMock = vi.fn(async () => jsonResponse(200, { token: 'token-after-change' }));
     vi.stubGlobal('fetch', fetchMock);
     renderWithProviders(<ChangePasswordForm />);
     fill({ current: 'old-password-1', next: 'a-new-password-2', again: 'a-new-password-2' });
-    expect((await screen.findByRole('status')).textContent).toBe('Password changed. Use the new one the next time you sign in.');
+    expect((await screen.findByRole('status')).textContent).toBe('Password changed. Other sessions with the old password are signed out; this one stays signed in.');
     const [url, init] = fetchMock.mock.calls[0] as unknown as [string, RequestInit];
     expect([url, init.method, JSON.parse(String(init.body))]).toEqual(['/api/users/me/password', 'PATCH', { currentPassword: 'old-password-1', newPassword: 'a-new-password-2' }]);
     expect(screen.getByLabelText('Current password')).toHaveProperty('value', '');
     expect(screen.getByLabelText('New password')).toHaveProperty('value', '');
+    expect(getToken()).toBe('token-after-change');
   });
 
   it("shows the service's refusal of a wrong current password under that field", async () => {

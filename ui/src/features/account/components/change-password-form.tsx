@@ -32,7 +32,7 @@ const EMPTY: ChangePasswordValues = { currentPassword: '', newPassword: '', conf
 
 /**
  * The signed-in user changes their own password. The service checks the current one; its
- * refusals show under the field they name. The session stays signed in afterwards.
+ * refusals show under the field they name. Other sessions end; this one stays signed in.
  */
 export function ChangePasswordForm() {
   const id = useId();
@@ -76,7 +76,7 @@ export function ChangePasswordForm() {
         ) : null}
         {change.isSuccess ? (
           <Text size="1" color="jade" role="status">
-            Password changed. Use the new one the next time you sign in.
+            Password changed. Other sessions with the old password are signed out; this one stays signed in.
           </Text>
         ) : null}
         {field('currentPassword', 'current-password')}

@@ -102,7 +102,7 @@ export function EditUserDialog({ user }: { user: UserAccount }) {
                 </Callout.Root>
               ) : null}
               {field('name', 'text', 'off')}
-              {field('password', 'password', 'new-password', `Leave empty to keep the current password. At least ${MIN_PASSWORD_LENGTH} characters; hand it over safely.`)}
+              {field('password', 'password', 'new-password', `Leave empty to keep the current password. At least ${MIN_PASSWORD_LENGTH} characters; hand it over safely. Their open sessions end.`)}
               <Flex gap="2" justify="end">
                 <Dialog.Close>
                   <Button type="button" variant="soft" color="gray">

@@ -25,21 +25,20 @@ export class MergedSamplesRepository {
       .orderBy(asc(logRuns.uploadedAt));
   }
 
-  /** Index curves of the runs and their curves of the given classes. */
-  curvesOfClasses(runIds: string[], classes: string[]) {
-    if (!runIds.length || !classes.length) return Promise.resolve([]);
+  /**
+   * In one query, the curves a merge reads: the index curve of every run, every curve of the
+   * given classes (splice sources), and the bound curves by mnemonic in the bound runs; ordered
+   * by position.
+   */
+  curvesForMerge(runIds: string[], boundRunIds: string[], mnemonics: string[], classes: string[]) {
+    if (!runIds.length) return Promise.resolve([]);
+    const wanted = [eq(curves.position, 0)];
+    if (classes.length) wanted.push(inArray(curves.curveClass, classes));
+    if (boundRunIds.length && mnemonics.length) wanted.push(and(inArray(curves.logRunId, boundRunIds), inArray(curves.mnemonic, mnemonics))!);
     return this.database.db
       .select({ logRunId: curves.logRunId, position: curves.position, mnemonic: curves.mnemonic, unit: curves.unit, curveClass: curves.curveClass, samples: curves.samples })
       .from(curves)
-      .where(and(inArray(curves.logRunId, runIds), or(eq(curves.position, 0), inArray(curves.curveClass, classes))))
+      .where(and(inArray(curves.logRunId, runIds), or(...wanted)))
       .orderBy(asc(curves.position));
-  }
-
-  curves(runIds: string[], mnemonics: string[]) {
-    if (!runIds.length) return Promise.resolve([]);
-    return this.database.db
-      .select({ logRunId: curves.logRunId, position: curves.position, mnemonic: curves.mnemonic, unit: curves.unit, samples: curves.samples })
-      .from(curves)
-      .where(and(inArray(curves.logRunId, runIds), or(eq(curves.position, 0), inArray(curves.mnemonic, mnemonics))));
   }
 }

@@ -50,11 +50,17 @@ export class MergedSamplesService {
     const runIds = [...new Set(bindings.map((b) => b.logRunId))];
     const allRuns = await this.repository.allRuns(wellId);
     const runs = allRuns.filter((r) => runIds.includes(r.id));
-    const rows = await this.repository.curves(runIds, [...new Set(bindings.map((b) => b.mnemonic))]);
-    const classRows = await this.repository.curvesOfClasses(
+    const mnemonics = [...new Set(bindings.map((b) => b.mnemonic))];
+    const classes = [...new Set(bindings.map((b) => BINDING_CLASSES[b.binding]))];
+    const read = await this.repository.curvesForMerge(
       allRuns.map((r) => r.id),
-      [...new Set(bindings.map((b) => BINDING_CLASSES[b.binding]))],
+      runIds,
+      mnemonics,
+      classes,
     );
+    // The bound runs' index and bound curves, and every run's index and curves of the bound classes.
+    const rows = read.filter((c) => runIds.includes(c.logRunId) && (c.position === 0 || mnemonics.includes(c.mnemonic)));
+    const classRows = read.filter((c) => c.position === 0 || (c.curveClass !== null && (classes as string[]).includes(c.curveClass)));
     const indexOf = (runId: string) => rows.find((c) => c.logRunId === runId && c.position === 0) ?? classRows.find((c) => c.logRunId === runId && c.position === 0);
     const primaries = bindings.map((b) => {
       const run = runs.find((r) => r.id === b.logRunId);

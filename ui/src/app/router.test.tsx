@@ -153,6 +153,15 @@ describe('routes', () => {
     expect(within(table).getByText('1,500 – 1,502 m')).toBeTruthy();
     expect(screen.getByRole('heading', { name: 'New well' })).toBeTruthy();
     expect(screen.getByLabelText('LAS files for Heron-1')).toBeTruthy();
+    expect(screen.queryByRole('button', { name: 'Edit North Basin' })).toBeNull();
+  });
+
+  it('offers the asset admin (not an organisation admin) to rename the asset from its page', async () => {
+    setToken('jwt-1');
+    stubService('admin');
+    renderAt('/assets/a1');
+    await screen.findByRole('table', { name: 'Wells' });
+    expect(screen.getByRole('button', { name: 'Edit North Basin' })).toBeTruthy();
   });
 
   it('hides the New well form and the upload control from a viewer', async () => {
@@ -162,6 +171,7 @@ describe('routes', () => {
     await screen.findByRole('table', { name: 'Wells' });
     expect(screen.queryByRole('heading', { name: 'New well' })).toBeNull();
     expect(screen.queryByLabelText('LAS files for Heron-1')).toBeNull();
+    expect(screen.queryByRole('button', { name: 'Edit North Basin' })).toBeNull();
   });
 
   it('opens the well page with its curves, diagnostics and a depth view drawn from the binary samples', async () => {

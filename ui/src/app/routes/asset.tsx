@@ -6,6 +6,7 @@ import { PageSpinner } from '../../components/page-spinner';
 import { PanelErrorBoundary } from '../../components/panel-error-boundary';
 import { assetQueryOptions, useAsset } from '../../features/assets/api/get-asset';
 import { useMe } from '../../features/auth/api/get-me';
+import { EditAssetDialog } from '../../features/assets/components/edit-asset-dialog';
 import { canEditWells, roleInAsset } from '../../features/auth/utils/permissions';
 import { DemoCheckPanel } from '../../features/demo-check/components/demo-check-panel';
 import { useWells, wellsQueryOptions } from '../../features/wells/api/get-wells';
@@ -48,6 +49,7 @@ export function AssetRoute() {
             {asset.data.name}
           </Heading>
           {me.data ? <Badge variant="soft">{roleInAsset(me.data, assetId) ?? asset.data.role}</Badge> : null}
+          {me.data && roleInAsset(me.data, assetId) === 'admin' ? <EditAssetDialog asset={asset.data} /> : null}
         </Flex>
         {asset.data.description ? <Text color="gray">{asset.data.description}</Text> : null}
         <AssetLinks assetId={assetId} showAudit={me.data ? ['admin', 'reviewer'].includes(roleInAsset(me.data, assetId) ?? '') : false} />

@@ -33,7 +33,9 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
 
   async onModuleInit(): Promise<void> {
     if (this.config.smtpUrl) {
-      this.transport = nodemailer.createTransport(this.config.smtpUrl);
+      // Short timeouts: an unreachable server marks the notice failed within seconds instead of
+      // holding it (and shutdown, which waits for sends) for nodemailer's default two minutes.
+      this.transport = nodemailer.createTransport({ url: this.config.smtpUrl, connectionTimeout: 15_000, greetingTimeout: 15_000, socketTimeout: 30_000 });
       return;
     }
     this.catcher = await MailCatcher.start(async (raw) => {

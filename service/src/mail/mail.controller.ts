@@ -1,4 +1,4 @@
-import { Controller, Get, NotFoundException, Param, ParseIntPipe, DefaultValuePipe, Query } from '@nestjs/common';
+import { BadRequestException, Controller, Get, NotFoundException, Param, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { MailMessage } from '@poreline/schema';
 import type { AuthUser } from '../auth/auth-user.js';
@@ -35,8 +35,10 @@ export class MailController {
 
   @Roles('admin')
   @Get()
-  async list(@CurrentUser() user: AuthUser, @Query('limit', new DefaultValuePipe(200), ParseIntPipe) limit: number): Promise<MailListDto> {
-    const rows = await this.repo.listForOrganisation(user.organisationId, Math.min(Math.max(limit, 1), 1000));
+  async list(@CurrentUser() user: AuthUser, @Query('limit') limit?: string): Promise<MailListDto> {
+    // Read as text: the global pipe would turn "lots" into NaN, which a database limit ignores.
+    if (limit !== undefined && !/^\d{1,9}$/.test(limit)) throw new BadRequestException('limit must be a whole number (1 to 1000)');
+    const rows = await this.repo.listForOrganisation(user.organisationId, Math.min(Math.max(Number(limit ?? 200), 1), 1000));
     return { mode: this.mail.mode, messages: rows.map((r) => toDto(r.message, r.assetName)) };
   }
 

@@ -81,9 +81,13 @@ describe('e-mail notices of review steps (real PGlite, real SMTP catcher)', () =
     expect(detail.body.raw).toContain('Mark the washout first.');
   });
 
-  it('the mail list is for global admins only (403 for others, 404 for an unknown id)', async () => {
+  it('the mail list is for global admins only (403 for others, 404 for an unknown id, 400 naming a bad limit)', async () => {
     expect((await t.http.get('/api/admin/mail').set('Authorization', await t.tokenFor('reviewer'))).status).toBe(403);
     expect((await t.http.get('/api/admin/mail/not-an-id').set('Authorization', admin)).status).toBe(404);
+    const badLimit = await t.http.get('/api/admin/mail?limit=lots').set('Authorization', admin);
+    expect(badLimit.status).toBe(400);
+    expect(badLimit.body.message).toMatch(/^limit must be a whole number/);
+    expect((await t.http.get('/api/admin/mail?limit=100000').set('Authorization', admin)).status).toBe(200);
     expect((await t.http.get('/api/admin/mail/00000000-0000-4000-8000-000000000000').set('Authorization', admin)).status).toBe(404);
   });
 });

@@ -107,14 +107,18 @@ export class InterpretationsService {
 
   /** The version of the well (404 for an unknown id or a version of another well). */
   async require(assetId: string, wellId: string, id: string): Promise<Interpretation> {
-    await this.wells.require(assetId, wellId);
+    return (await this.requireWithWell(assetId, wellId, id)).row;
+  }
+
+  private async requireWithWell(assetId: string, wellId: string, id: string) {
+    const well = await this.wells.require(assetId, wellId);
     const row = isUuid(id) ? await this.interpretations.find(wellId, id) : undefined;
     if (!row) throw new NotFoundException('No such interpretation version for this well.');
-    return row;
+    return { well, row };
   }
 
   private async step(assetId: string, wellId: string, id: string, action: ReviewAction, user: Pick<AuthUser, 'id'>, comment: string | null): Promise<InterpretationDto> {
-    const row = await this.require(assetId, wellId, id);
+    const { well, row } = await this.requireWithWell(assetId, wellId, id);
     const next = reviewStep(row.status, action);
     if (!next.ok) throw new ConflictException(`Version ${row.version}: ${next.reason}.`);
     if (action === 'approve' && row.submittedBy === user.id) throw new ForbiddenException('You submitted this version; another reviewer must approve it.');
@@ -133,7 +137,6 @@ export class InterpretationsService {
       after: interpretationAuditView(after),
     }));
     if (!updated) throw new ConflictException(`Version ${row.version} changed meanwhile; reload and try again.`);
-    const well = await this.wells.require(assetId, wellId);
     await this.notices.stepTaken({
       assetId,
       action,

@@ -43,24 +43,23 @@ export function CorrelationsEditor({ control, register, errors, uncertain, label
               const message = e?.a?.message ?? e?.b?.message ?? e?.rank?.message;
               return (
                 <Table.Row key={f.id}>
-                  <Table.Cell>
-                    <select className="native-select" aria-label={`Correlation ${i + 1}: first input`} disabled={disabled} aria-invalid={e?.a ? true : undefined} {...register(`correlations.${i}.a`)}>
-                      {INPUT_ORDER.map((n) => (
-                        <option key={n} value={n}>
-                          {labelOf(n)}
-                        </option>
-                      ))}
-                    </select>
-                  </Table.Cell>
-                  <Table.Cell>
-                    <select className="native-select" aria-label={`Correlation ${i + 1}: second input`} disabled={disabled} aria-invalid={e?.b ? true : undefined} {...register(`correlations.${i}.b`)}>
-                      {INPUT_ORDER.map((n) => (
-                        <option key={n} value={n}>
-                          {labelOf(n)}
-                        </option>
-                      ))}
-                    </select>
-                  </Table.Cell>
+                  {(['a', 'b'] as const).map((side) => (
+                    <Table.Cell key={side}>
+                      <select
+                        className="native-select"
+                        aria-label={`Correlation ${i + 1}: ${side === 'a' ? 'first' : 'second'} input`}
+                        disabled={disabled}
+                        aria-invalid={e?.[side] ? true : undefined}
+                        {...register(`correlations.${i}.${side}`)}
+                      >
+                        {INPUT_ORDER.map((n) => (
+                          <option key={n} value={n}>
+                            {labelOf(n)}
+                          </option>
+                        ))}
+                      </select>
+                    </Table.Cell>
+                  ))}
                   <Table.Cell>
                     <Flex direction="column" gap="1">
                       <input
